@@ -1,0 +1,141 @@
+package dev.positioner.diagnosis;
+
+import dev.positioner.knowledge.Catalogue;
+import dev.positioner.knowledge.CheckDef;
+import dev.positioner.knowledge.Fault;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+
+/**
+ * Chooses the next check by expected cost of repair with one-step look-ahead ({@link ExpectedCost}).
+ * Only checks that could change the decision are candidates: some outcome must change which cause
+ * leads, or lift the leader to the stopping threshold. Among them the lowest ECO wins; a check
+ * that needs a bypass costs its minutes plus a penalty for running the process on manual.
+ */
+public final class CheckPlanner {
+
+    private final Catalogue catalogue;
+    private final double stopThreshold;
+    private final double bypassPenalty;
+
+    public CheckPlanner(Catalogue catalogue, double stopThreshold, double bypassPenaltyMinutes) {
+        this.catalogue = catalogue;
+        this.stopThreshold = stopThreshold;
+        this.bypassPenalty = bypassPenaltyMinutes;
+    }
+
+    public CheckPlan plan(double[] p, Set<String> done, Set<String> unavailable) {
+        List<Fault> hypotheses = catalogue.hypotheses();
+        double[] repair = hypotheses.stream().mapToDouble(Fault::repairMinutes).toArray();
+        double ecrNow = ExpectedCost.ecr(p, repair);
+        int leader = Bayes.argmax(p);
+        if (p[leader] >= stopThreshold) {
+            return stop(String.format(Locale.ROOT, "The leading cause, %s, is at %.0f %%, at or above the stopping threshold of %.0f %%.",
+                    hypotheses.get(leader).code(), p[leader] * 100, stopThreshold * 100), ecrNow);
+        }
+        CheckDef best = null;
+        double bestEco = Double.POSITIVE_INFINITY;
+        List<String> blocked = new ArrayList<>();
+        for (CheckDef check : catalogue.checks().values()) {
+            if (done.contains(check.code())) {
+                continue;
+            }
+            double[][] table = table(check, hypotheses);
+            if (!canChangeDecision(p, leader, table)) {
+                continue;
+            }
+            if (unavailable.contains(check.code())) {
+                blocked.add(check.code());
+                continue;
+            }
+            double eco = ExpectedCost.eco(p, repair, cost(check), table);
+            if (eco < bestEco) {
+                bestEco = eco;
+                best = check;
+            }
+        }
+        if (best == null) {
+            String reason = blocked.isEmpty()
+                    ? "No remaining check could change which cause to act on; act on the leading cause."
+                    : "The only checks that could change the decision are marked unavailable: " + String.join(", ", blocked) + ".";
+            return stop(reason, ecrNow);
+        }
+        return new CheckPlan(best, why(best, p, hypotheses, ecrNow, bestEco), null, ecrNow, bestEco);
+    }
+
+    public double cost(CheckDef check) {
+        return check.minutes() + (check.bypass() ? bypassPenalty : 0);
+    }
+
+    static double[][] table(CheckDef check, List<Fault> hypotheses) {
+        double[][] table = new double[check.outcomes().size()][hypotheses.size()];
+        for (int k = 0; k < table.length; k++) {
+            String outcome = check.outcomes().get(k);
+            for (int h = 0; h < hypotheses.size(); h++) {
+                Fault f = hypotheses.get(h);
+                // The unlisted cause says nothing about a catalogued check: every outcome equally likely.
+                table[k][h] = h == hypotheses.size() - 1 ? 1.0 / table.length : check.likelihood(outcome, f.code());
+            }
+        }
+        return table;
+    }
+
+    private boolean canChangeDecision(double[] p, int leader, double[][] table) {
+        for (double[] likelihood : table) {
+            if (Bayes.predictive(p, likelihood) < 1e-6) {
+                continue;
+            }
+            double[] after = Bayes.update(p, likelihood);
+            int newLeader = Bayes.argmax(after);
+            if (newLeader != leader || after[newLeader] >= stopThreshold) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private String why(CheckDef check, double[] p, List<Fault> hypotheses, double ecrNow, double eco) {
+        double[][] table = table(check, hypotheses);
+        double[][] after = new double[table.length][];
+        for (int k = 0; k < table.length; k++) {
+            after[k] = Bayes.update(p, table[k]);
+        }
+        List<Integer> moved = new ArrayList<>();
+        for (int h = 0; h < p.length; h++) {
+            moved.add(h);
+        }
+        moved.sort(Comparator.comparingDouble((Integer h) -> -spread(after, h)));
+        StringBuilder text = new StringBuilder("Separates ");
+        for (int i = 0; i < Math.min(2, moved.size()); i++) {
+            int h = moved.get(i);
+            text.append(i == 0 ? "" : " from ").append(hypotheses.get(h).code())
+                    .append(String.format(Locale.ROOT, " (now %.0f %%)", p[h] * 100));
+        }
+        text.append(". ");
+        for (int k = 0; k < table.length; k++) {
+            int lead = Bayes.argmax(after[k]);
+            text.append(String.format(Locale.ROOT, "If '%s' (expected %.0f %%): %s leads at %.0f %%. ",
+                    check.outcomes().get(k), Bayes.predictive(p, table[k]) * 100, hypotheses.get(lead).code(),
+                    after[k][lead] * 100));
+        }
+        text.append(String.format(Locale.ROOT, "Expected cost to finish: %.0f min with this check first, %.0f min acting on the causes in order now", eco, ecrNow));
+        text.append(check.bypass() ? String.format(Locale.ROOT, " (the check counts %.0f min extra for the bypass).", bypassPenalty) : ".");
+        return text.toString();
+    }
+
+    private static double spread(double[][] after, int h) {
+        double min = 1, max = 0;
+        for (double[] a : after) {
+            min = Math.min(min, a[h]);
+            max = Math.max(max, a[h]);
+        }
+        return max - min;
+    }
+
+    private static CheckPlan stop(String reason, double ecrNow) {
+        return new CheckPlan(null, null, reason, ecrNow, Double.NaN);
+    }
+}

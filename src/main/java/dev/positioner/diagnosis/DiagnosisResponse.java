@@ -1,0 +1,27 @@
+package dev.positioner.diagnosis;
+
+import com.fasterxml.jackson.annotation.JsonInclude;
+import java.util.List;
+
+/** The one-shot response; field names are the contract's (see openapi/openapi.yaml). */
+public record DiagnosisResponse(List<HypothesisView> hypotheses, NextCheckView nextCheck, List<FindingView> findings,
+        List<String> cautions, List<String> assumptions, DecisionView decision) {
+
+    public record HypothesisView(String fault, String title, double probability, String failureMode,
+            String mechanism, String action, List<String> reasons) {
+    }
+
+    public record NextCheckView(String check, String title, double minutes, List<String> outcomes,
+            boolean bypassRequired, List<String> instructions, List<String> cautions, String why) {
+    }
+
+    @JsonInclude(JsonInclude.Include.NON_NULL)
+    public record FindingView(String code, String text, Double value, String unit, String limit) {
+    }
+
+    /** How the next check was decided: method, expected costs in minutes, and why it stopped if it did. */
+    @JsonInclude(JsonInclude.Include.NON_NULL)
+    public record DecisionView(String method, double stopThreshold, Double expectedCostNowMinutes,
+            Double expectedCostWithCheckMinutes, String stopReason, List<String> rulesFired) {
+    }
+}

@@ -1,0 +1,111 @@
+package dev.positioner.diagnosis;
+
+import dev.positioner.asset.AssetDirectory;
+import dev.positioner.diagnosis.DiagnosisResponse.DecisionView;
+import dev.positioner.diagnosis.DiagnosisResponse.FindingView;
+import dev.positioner.diagnosis.DiagnosisResponse.HypothesisView;
+import dev.positioner.diagnosis.DiagnosisResponse.NextCheckView;
+import dev.positioner.diagnosis.facts.Assumption;
+import dev.positioner.diagnosis.facts.Caution;
+import dev.positioner.diagnosis.facts.Observation;
+import dev.positioner.diagnosis.facts.Reading;
+import dev.positioner.knowledge.Catalogue;
+import dev.positioner.knowledge.CheckDef;
+import dev.positioner.knowledge.Fault;
+import dev.positioner.knowledge.KnowledgeBase;
+import jakarta.enterprise.context.ApplicationScoped;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.function.Function;
+import java.util.stream.Collectors;
+import java.util.stream.IntStream;
+import org.eclipse.microprofile.config.inject.ConfigProperty;
+
+/**
+ * Request in, ranked causes and next check out: validation, facts, rules, Bayes, planner. Stateless;
+ * everything a call needs comes in with it or from the knowledge base.
+ */
+@ApplicationScoped
+public class DiagnosisService {
+
+    static final String METHOD = "Expected cost of repair with one-step look-ahead (Heckerman, Breese and Rommelse, CACM 1995)";
+
+    private final Catalogue catalogue;
+    private final RuleEngine engine;
+    private final AssetDirectory assets;
+    private final CheckPlanner planner;
+    private final double stopThreshold;
+
+    public DiagnosisService(KnowledgeBase knowledge, RuleEngine engine, AssetDirectory assets,
+            @ConfigProperty(name = "positioner.stop-threshold") double stopThreshold,
+            @ConfigProperty(name = "positioner.bypass-penalty-minutes") double bypassPenalty) {
+        this.catalogue = knowledge.catalogue();
+        this.engine = engine;
+        this.assets = assets;
+        this.stopThreshold = stopThreshold;
+        this.planner = new CheckPlanner(catalogue, stopThreshold, bypassPenalty);
+    }
+
+    public DiagnosisResponse diagnose(DiagnosisRequest request) {
+        DiagnosisInput input = new RequestReader(catalogue, assets).read(request);
+        List<Object> facts = new ArrayList<>();
+        facts.addAll(input.symptoms());
+        facts.addAll(input.readings());
+        facts.addAll(input.checks());
+        facts.addAll(input.assumptions());
+        facts.addAll(NormalBands.facts(input.asset()));
+        RuleOutcome outcome = engine.evaluate(facts);
+
+        Map<String, Reading> readings = input.readings().stream().collect(Collectors.toMap(Reading::quantity, Function.identity()));
+        List<EvidenceItem> items = EvidenceItems.from(catalogue, outcome, readings);
+        List<Fault> hypotheses = catalogue.hypotheses();
+        double[] prior = hypotheses.stream().mapToDouble(Fault::prior).toArray();
+        double[] posterior = Bayes.posterior(prior, items.stream().map(EvidenceItem::likelihood).toList());
+
+        Set<String> done = outcome.observations().stream().map(Observation::check).collect(Collectors.toSet());
+        CheckPlan plan = planner.plan(posterior, done, input.unavailableChecks());
+        return new DiagnosisResponse(rank(hypotheses, prior, posterior, items), nextCheck(plan),
+                outcome.findings().stream().map(f -> new FindingView(f.code(), f.text(),
+                        Double.isNaN(f.value()) ? null : f.value(), f.unit(), f.limit())).toList(),
+                cautions(outcome, plan), outcome.assumptions().stream().map(Assumption::text).distinct().toList(),
+                new DecisionView(METHOD, stopThreshold, plan.expectedCostNow(),
+                        Double.isNaN(plan.expectedCostWithCheck()) ? null : plan.expectedCostWithCheck(),
+                        plan.stopReason(), List.copyOf(outcome.firedRules())));
+    }
+
+    private List<HypothesisView> rank(List<Fault> hypotheses, double[] prior, double[] posterior, List<EvidenceItem> items) {
+        String priorNote = "Prior from the fault catalogue (no site history applied).";
+        return IntStream.range(0, hypotheses.size()).boxed()
+                .sorted(Comparator.comparingDouble((Integer h) -> -posterior[h]))
+                .map(h -> {
+                    Fault f = hypotheses.get(h);
+                    return new HypothesisView(f.code(), f.title(), posterior[h], f.failureMode(), f.mechanism(),
+                            f.action(), Reasons.forHypothesis(h, prior, items, priorNote));
+                })
+                .toList();
+    }
+
+    private NextCheckView nextCheck(CheckPlan plan) {
+        CheckDef c = plan.check();
+        if (c == null) {
+            return null;
+        }
+        return new NextCheckView(c.code(), c.title(), c.minutes(), c.outcomes(), c.bypass(), c.instructions(),
+                c.cautions().stream().map(code -> catalogue.cautions().get(code)).toList(), plan.why());
+    }
+
+    /** Situation cautions first (site procedures leads), then those of the next check, each once. */
+    private List<String> cautions(RuleOutcome outcome, CheckPlan plan) {
+        Set<String> codes = new LinkedHashSet<>();
+        codes.add("site_procedures");
+        outcome.cautions().stream().map(Caution::code).sorted().forEach(codes::add);
+        if (plan.check() != null) {
+            codes.addAll(plan.check().cautions());
+        }
+        return codes.stream().map(code -> catalogue.cautions().getOrDefault(code, code)).toList();
+    }
+}

@@ -1,0 +1,93 @@
+package dev.positioner.diagnosis;
+
+import dev.positioner.diagnosis.facts.Evidence;
+import dev.positioner.diagnosis.facts.Observation;
+import dev.positioner.diagnosis.facts.Reading;
+import dev.positioner.diagnosis.facts.ReportedSymptom;
+import dev.positioner.knowledge.Catalogue;
+import dev.positioner.knowledge.CheckDef;
+import dev.positioner.knowledge.Fault;
+import dev.positioner.knowledge.SymptomDef;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Turns what the rules concluded into likelihood vectors. Each symptom and each check counts once
+ * (a technician's check before a reading of the same thing); subsumed symptoms and explained
+ * evidence are left out, which is what makes them neutral.
+ */
+final class EvidenceItems {
+
+    private EvidenceItems() {
+    }
+
+    static List<EvidenceItem> from(Catalogue catalogue, RuleOutcome outcome, Map<String, Reading> readings) {
+        List<Fault> hypotheses = catalogue.hypotheses();
+        List<EvidenceItem> items = new ArrayList<>();
+        Map<String, ReportedSymptom> symptoms = new LinkedHashMap<>();
+        outcome.symptoms().stream().sorted(java.util.Comparator.comparing((ReportedSymptom s) -> !s.origin().equals("client")))
+                .forEach(s -> symptoms.putIfAbsent(s.code(), s));
+        for (ReportedSymptom s : symptoms.values()) {
+            SymptomDef def = catalogue.symptoms().get(s.code());
+            if (def == null || outcome.isSubsumed(s.code()) || outcome.explanation("symptom:" + s.code()).isPresent()) {
+                continue;
+            }
+            double[] l = new double[hypotheses.size()];
+            for (int h = 0; h < l.length; h++) {
+                double present = h == l.length - 1 ? catalogue.unlistedSymptomPresent() : def.present(hypotheses.get(h).code());
+                l[h] = s.present() ? present : 1 - present;
+            }
+            String derived = s.origin().equals("client") ? "" : " (from the readings)";
+            items.add(new EvidenceItem((s.present() ? "Reported: " : "Reported absent: ") + def.text().toLowerCase() + derived, l));
+        }
+        Map<String, Observation> observations = new LinkedHashMap<>();
+        outcome.observations().stream().sorted(java.util.Comparator.comparing((Observation o) -> !o.byTechnician()))
+                .forEach(o -> observations.putIfAbsent(o.check(), o));
+        for (Observation o : observations.values()) {
+            CheckDef check = catalogue.checks().get(o.check());
+            if (check == null || !check.outcomes().contains(o.outcome())
+                    || outcome.explanation("check:" + o.check()).isPresent()) {
+                continue;
+            }
+            double[] l = new double[hypotheses.size()];
+            for (int h = 0; h < l.length; h++) {
+                l[h] = h == l.length - 1 ? 1.0 / check.outcomes().size() : check.likelihood(o.outcome(), hypotheses.get(h).code());
+            }
+            items.add(new EvidenceItem(observationLabel(check, o, readings), l));
+        }
+        for (Evidence e : outcome.evidence()) {
+            int h = indexOf(hypotheses, e.fault());
+            if (h < 0) {
+                continue;
+            }
+            double[] l = new double[hypotheses.size()];
+            Arrays.fill(l, 1.0);
+            l[h] = e.factor();
+            items.add(new EvidenceItem(e.reason(), l));
+        }
+        return items;
+    }
+
+    private static String observationLabel(CheckDef check, Observation o, Map<String, Reading> readings) {
+        if (o.byTechnician()) {
+            return check.title() + ": " + o.outcome().replace('_', ' ');
+        }
+        String quantity = o.origin().replaceFirst("^reading:", "");
+        Reading r = readings.get(quantity);
+        String reading = r == null ? quantity.replace('_', ' ')
+                : quantity.replace('_', ' ') + " " + dev.positioner.diagnosis.facts.Say.show(r.givenValue(), r.givenUnit());
+        return check.title() + ": " + o.outcome().replace('_', ' ') + " (from the reading, " + reading + ")";
+    }
+
+    private static int indexOf(List<Fault> hypotheses, String code) {
+        for (int h = 0; h < hypotheses.size(); h++) {
+            if (hypotheses.get(h).code().equals(code)) {
+                return h;
+            }
+        }
+        return -1;
+    }
+}

@@ -1,0 +1,204 @@
+package dev.positioner.diagnosis;
+
+import dev.positioner.api.FieldError;
+import dev.positioner.api.InvalidRequestException;
+import dev.positioner.asset.AssetDirectory;
+import dev.positioner.asset.AssetRecord;
+import dev.positioner.diagnosis.DiagnosisRequest.AssetInput;
+import dev.positioner.diagnosis.DiagnosisRequest.CheckInput;
+import dev.positioner.diagnosis.DiagnosisRequest.MeasurementInput;
+import dev.positioner.diagnosis.facts.Assumption;
+import dev.positioner.diagnosis.facts.Observation;
+import dev.positioner.diagnosis.facts.Reading;
+import dev.positioner.diagnosis.facts.ReportedSymptom;
+import dev.positioner.knowledge.Catalogue;
+import dev.positioner.knowledge.CheckDef;
+import dev.positioner.measure.QuantityDef;
+import dev.positioner.measure.UnitConverter;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.regex.Pattern;
+
+/**
+ * Validates a diagnosis request against the catalogue and converts it to facts. It collects every
+ * error with its JSON path before failing, so a client fixes its request in one round.
+ */
+final class RequestReader {
+
+    /** ISO 3448 viscosity grades (kinematic viscosity at 40 degC, mm2/s). */
+    static final Set<String> ISO_VG = Set.of("VG2", "VG3", "VG5", "VG7", "VG10", "VG15", "VG22", "VG32", "VG46",
+            "VG68", "VG100", "VG150", "VG220", "VG320", "VG460", "VG680", "VG1000", "VG1500");
+    /** ISO 4406 three-part code; scale numbers run from 0 to 28 (ISO 4406:2021 Table 1, ">28" aside). */
+    static final Pattern ISO4406 = Pattern.compile("(\\d{1,2})/(\\d{1,2})/(\\d{1,2})");
+
+    private final Catalogue catalogue;
+    private final AssetDirectory assets;
+    private final List<FieldError> errors = new ArrayList<>();
+    private final List<Assumption> assumptions = new ArrayList<>();
+
+    RequestReader(Catalogue catalogue, AssetDirectory assets) {
+        this.catalogue = catalogue;
+        this.assets = assets;
+    }
+
+    DiagnosisInput read(DiagnosisRequest request) {
+        if (request == null) {
+            throw new InvalidRequestException("$", "a JSON body is required");
+        }
+        AssetSpec asset = asset(request.asset());
+        double stroke = Optional.ofNullable(asset.value("stroke_length")).orElse(NormalBands.DEFAULT_STROKE_M);
+        List<ReportedSymptom> symptoms = symptoms(request);
+        List<Reading> readings = readings(request.measurements(), stroke);
+        List<Observation> checks = checks(request.checks());
+        Set<String> unavailable = new LinkedHashSet<>();
+        each(request.unavailableChecks(), "unavailableChecks", (code, field) -> {
+            if (!catalogue.checks().containsKey(code)) {
+                errors.add(new FieldError(field, "unknown check '" + code + "'"));
+            }
+            unavailable.add(code);
+        });
+        if (!errors.isEmpty()) {
+            throw new InvalidRequestException(errors);
+        }
+        return new DiagnosisInput(symptoms, readings, checks, unavailable, asset, assumptions);
+    }
+
+    private List<ReportedSymptom> symptoms(DiagnosisRequest request) {
+        Map<String, ReportedSymptom> out = new LinkedHashMap<>();
+        each(request.symptoms(), "symptoms", (code, field) -> symptom(out, code, field, true));
+        each(request.absentSymptoms(), "absentSymptoms", (code, field) -> symptom(out, code, field, false));
+        return new ArrayList<>(out.values());
+    }
+
+    private void symptom(Map<String, ReportedSymptom> out, String code, String field, boolean present) {
+        if (!catalogue.symptoms().containsKey(code)) {
+            errors.add(new FieldError(field, "unknown symptom '" + code + "'"));
+        } else if (out.containsKey(code)) {
+            errors.add(new FieldError(field, "symptom '" + code + "' is given twice (present and absent?)"));
+        } else {
+            out.put(code, new ReportedSymptom(code, present, "client"));
+        }
+    }
+
+    private List<Reading> readings(List<MeasurementInput> inputs, double strokeM) {
+        Map<String, Reading> out = new LinkedHashMap<>();
+        for (int i = 0; inputs != null && i < inputs.size(); i++) {
+            String field = "measurements[" + i + "]";
+            Reading r = quantity(inputs.get(i), field, catalogue.measurements(), strokeM);
+            if (r != null && out.put(r.quantity(), r) != null) {
+                errors.add(new FieldError(field + ".quantity", "'" + r.quantity() + "' is given twice"));
+            }
+        }
+        return new ArrayList<>(out.values());
+    }
+
+    /** Converts one {quantity, value, unit}; returns null (with errors recorded) if it is not valid. */
+    private Reading quantity(MeasurementInput m, String field, Map<String, QuantityDef> defs, double strokeM) {
+        if (m == null) {
+            errors.add(new FieldError(field, "must be an object with quantity, value and unit"));
+            return null;
+        }
+        QuantityDef def = m.quantity() == null ? null : defs.get(m.quantity());
+        if (def == null) {
+            errors.add(new FieldError(field + ".quantity", m.quantity() == null ? "is required"
+                    : "unknown quantity '" + m.quantity() + "'"));
+            return null;
+        }
+        if (m.value() == null || !Double.isFinite(m.value())) {
+            errors.add(new FieldError(field + ".value", m.value() == null ? "is required" : "must be a finite number"));
+            return null;
+        }
+        if (m.unit() == null || !def.accepts(m.unit())) {
+            errors.add(new FieldError(field + ".unit", (m.unit() == null ? "is required" : "unit '" + m.unit()
+                    + "' is not accepted") + " for " + def.code() + "; use one of " + def.units()));
+            return null;
+        }
+        double value = UnitConverter.toCanonical(def, m.value(), m.unit(), strokeM);
+        if (value < def.min() || value > def.max()) {
+            errors.add(new FieldError(field + ".value", String.format(Locale.ROOT,
+                    "%s %s is not a possible %s", m.value(), m.unit(), def.code().replace('_', ' '))));
+            return null;
+        }
+        return new Reading(def.code(), value, def.kind().canonicalUnit(), m.value(), m.unit());
+    }
+
+    private List<Observation> checks(List<CheckInput> inputs) {
+        Map<String, Observation> out = new LinkedHashMap<>();
+        for (int i = 0; inputs != null && i < inputs.size(); i++) {
+            String field = "checks[" + i + "]";
+            CheckInput c = inputs.get(i);
+            CheckDef def = c == null || c.check() == null ? null : catalogue.checks().get(c.check());
+            if (def == null) {
+                errors.add(new FieldError(field + ".check", c == null || c.check() == null ? "is required"
+                        : "unknown check '" + c.check() + "'"));
+            } else if (c.outcome() == null || !def.outcomes().contains(c.outcome())) {
+                errors.add(new FieldError(field + ".outcome", "outcome of " + def.code() + " must be one of "
+                        + def.outcomes() + (c.outcome() == null ? "" : ", not '" + c.outcome() + "'")));
+            } else if (out.put(def.code(), new Observation(def.code(), c.outcome(), Observation.TECHNICIAN)) != null) {
+                errors.add(new FieldError(field + ".check", "check '" + def.code() + "' is given twice"));
+            }
+        }
+        return new ArrayList<>(out.values());
+    }
+
+    private AssetSpec asset(AssetInput input) {
+        if (input == null) {
+            assumptions.add(new Assumption("No asset data given: defaults assumed for every design value."));
+            return AssetSpec.none();
+        }
+        Optional<AssetRecord> registered = input.tag() == null ? Optional.empty() : assets.find(input.tag());
+        if (input.tag() != null && registered.isEmpty()) {
+            assumptions.add(new Assumption("Tag " + input.tag() + " is not in the valve registry: only the design data sent were used."));
+        }
+        Map<String, Double> design = new LinkedHashMap<>();
+        registered.ifPresent(r -> convertDesign(r.design(), "registry " + r.tag() + " design", design, false));
+        convertDesign(input.design(), "asset.design", design, true);
+        String grade = input.oilGrade() != null ? input.oilGrade() : registered.map(AssetRecord::oilGrade).orElse(null);
+        if (grade != null && !ISO_VG.contains(grade)) {
+            errors.add(new FieldError("asset.oilGrade", "'" + grade + "' is not an ISO 3448 grade such as VG46"));
+        }
+        String target = input.cleanlinessTarget() != null ? input.cleanlinessTarget()
+                : registered.map(AssetRecord::cleanlinessTarget).orElse(null);
+        if (target != null && !validIso4406(target)) {
+            errors.add(new FieldError("asset.cleanlinessTarget", "'" + target + "' is not an ISO 4406 code such as 16/14/11"));
+        }
+        return new AssetSpec(input.tag(), grade, target, design);
+    }
+
+    private void convertDesign(List<MeasurementInput> inputs, String prefix, Map<String, Double> design, boolean fromClient) {
+        for (int i = 0; inputs != null && i < inputs.size(); i++) {
+            Reading r = quantity(inputs.get(i), prefix + "[" + i + "]", catalogue.design(), NormalBands.DEFAULT_STROKE_M);
+            if (r != null) {
+                design.put(r.quantity(), r.value());
+            }
+        }
+        if (!fromClient && !errors.isEmpty()) {
+            throw new IllegalStateException("registry entry has invalid design data: " + errors);
+        }
+    }
+
+    static boolean validIso4406(String code) {
+        var m = ISO4406.matcher(code);
+        if (!m.matches()) {
+            return false;
+        }
+        for (int g = 1; g <= 3; g++) {
+            if (Integer.parseInt(m.group(g)) > 28) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static void each(List<String> codes, String name, java.util.function.BiConsumer<String, String> action) {
+        for (int i = 0; codes != null && i < codes.size(); i++) {
+            action.accept(codes.get(i), name + "[" + i + "]");
+        }
+    }
+}

@@ -1,0 +1,25 @@
+package dev.positioner.knowledge;
+
+import dev.positioner.measure.QuantityDef;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The whole catalogue as data. Maps keep file order, which is the order reports list entries in.
+ * {@code unlisted} is the explicit "not in the catalogue" hypothesis; {@code unlistedSymptomPresent}
+ * is P(a reported symptom is present | the cause is not catalogued).
+ */
+public record Catalogue(Map<String, Fault> faults, Fault unlisted, double unlistedSymptomPresent,
+        Map<String, SymptomDef> symptoms, Map<String, CheckDef> checks, Map<String, String> cautions,
+        Map<String, String> sources, Map<String, QuantityDef> measurements, Map<String, QuantityDef> design) {
+
+    /** Faults then the unlisted hypothesis: the index order of every probability vector. */
+    public List<Fault> hypotheses() {
+        return java.util.stream.Stream.concat(faults.values().stream(), java.util.stream.Stream.of(unlisted))
+                .toList();
+    }
+
+    public Fault hypothesis(String code) {
+        return code.equals(unlisted.code()) ? unlisted : faults.get(code);
+    }
+}

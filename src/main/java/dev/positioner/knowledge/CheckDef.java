@@ -1,0 +1,22 @@
+package dev.positioner.knowledge;
+
+import java.util.List;
+import java.util.Map;
+
+/**
+ * A check a technician can make, what it costs, what it needs, and P(outcome | fault). Faults not
+ * listed under {@code given} take the {@code otherwise} distribution.
+ */
+public record CheckDef(String code, String title, double minutes, boolean bypass, List<String> outcomes,
+        List<String> instructions, List<String> cautions, Map<String, Double> otherwise,
+        Map<String, Map<String, Double>> given, List<String> sources) {
+
+    public double likelihood(String outcome, String fault) {
+        Map<String, Double> row = given.getOrDefault(fault, otherwise);
+        return row.getOrDefault(outcome, 0.0);
+    }
+
+    public String normalOutcome() {
+        return outcomes.get(0);
+    }
+}
