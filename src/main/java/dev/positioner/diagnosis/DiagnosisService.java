@@ -37,15 +37,17 @@ public class DiagnosisService {
     private final Catalogue catalogue;
     private final RuleEngine engine;
     private final AssetDirectory assets;
+    private final PriorSource priorSource;
     private final CheckPlanner planner;
     private final double stopThreshold;
 
-    public DiagnosisService(KnowledgeBase knowledge, RuleEngine engine, AssetDirectory assets,
+    public DiagnosisService(KnowledgeBase knowledge, RuleEngine engine, AssetDirectory assets, PriorSource priorSource,
             @ConfigProperty(name = "positioner.stop-threshold") double stopThreshold,
             @ConfigProperty(name = "positioner.bypass-penalty-minutes") double bypassPenalty) {
         this.catalogue = knowledge.catalogue();
         this.engine = engine;
         this.assets = assets;
+        this.priorSource = priorSource;
         this.stopThreshold = stopThreshold;
         this.planner = new CheckPlanner(catalogue, stopThreshold, bypassPenalty);
     }
@@ -63,12 +65,13 @@ public class DiagnosisService {
         Map<String, Reading> readings = input.readings().stream().collect(Collectors.toMap(Reading::quantity, Function.identity()));
         List<EvidenceItem> items = EvidenceItems.from(catalogue, outcome, readings);
         List<Fault> hypotheses = catalogue.hypotheses();
-        double[] prior = hypotheses.stream().mapToDouble(Fault::prior).toArray();
+        Priors priors = priorSource.priors(catalogue, input.asset());
+        double[] prior = priors.values();
         double[] posterior = Bayes.posterior(prior, items.stream().map(EvidenceItem::likelihood).toList());
 
         Set<String> done = outcome.observations().stream().map(Observation::check).collect(Collectors.toSet());
         CheckPlan plan = planner.plan(posterior, done, input.unavailableChecks());
-        return new DiagnosisResponse(rank(hypotheses, prior, posterior, items), nextCheck(plan),
+        return new DiagnosisResponse(rank(hypotheses, prior, posterior, items, priors.basis()), nextCheck(plan),
                 outcome.findings().stream().map(f -> new FindingView(f.code(), f.text(),
                         Double.isNaN(f.value()) ? null : f.value(), f.unit(), f.limit())).toList(),
                 cautions(outcome, plan), outcome.assumptions().stream().map(Assumption::text).distinct().toList(),
@@ -77,8 +80,8 @@ public class DiagnosisService {
                         plan.stopReason(), List.copyOf(outcome.firedRules())));
     }
 
-    private List<HypothesisView> rank(List<Fault> hypotheses, double[] prior, double[] posterior, List<EvidenceItem> items) {
-        String priorNote = "Prior from the fault catalogue (no site history applied).";
+    private List<HypothesisView> rank(List<Fault> hypotheses, double[] prior, double[] posterior, List<EvidenceItem> items,
+            String priorNote) {
         return IntStream.range(0, hypotheses.size()).boxed()
                 .sorted(Comparator.comparingDouble((Integer h) -> -posterior[h]))
                 .map(h -> {
