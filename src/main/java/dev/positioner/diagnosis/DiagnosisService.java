@@ -71,23 +71,23 @@ public class DiagnosisService {
 
         Set<String> done = outcome.observations().stream().map(Observation::check).collect(Collectors.toSet());
         CheckPlan plan = planner.plan(posterior, done, input.unavailableChecks());
-        return new DiagnosisResponse(rank(hypotheses, prior, posterior, items, priors.basis()), nextCheck(plan),
+        return new DiagnosisResponse(rank(hypotheses, prior, posterior, items, priors.notes()), nextCheck(plan),
                 outcome.findings().stream().map(f -> new FindingView(f.code(), f.text(),
                         Double.isNaN(f.value()) ? null : f.value(), f.unit(), f.limit())).toList(),
-                cautions(outcome, plan), outcome.assumptions().stream().map(Assumption::text).distinct().toList(),
+                cautions(outcome, plan), assumptions(outcome, priors),
                 new DecisionView(METHOD, stopThreshold, plan.expectedCostNow(),
                         Double.isNaN(plan.expectedCostWithCheck()) ? null : plan.expectedCostWithCheck(),
                         plan.stopReason(), List.copyOf(outcome.firedRules())));
     }
 
     private List<HypothesisView> rank(List<Fault> hypotheses, double[] prior, double[] posterior, List<EvidenceItem> items,
-            String priorNote) {
+            String[] priorNotes) {
         return IntStream.range(0, hypotheses.size()).boxed()
                 .sorted(Comparator.comparingDouble((Integer h) -> -posterior[h]))
                 .map(h -> {
                     Fault f = hypotheses.get(h);
                     return new HypothesisView(f.code(), f.title(), posterior[h], f.failureMode(), f.mechanism(),
-                            f.action(), Reasons.forHypothesis(h, prior, items, priorNote));
+                            f.action(), Reasons.forHypothesis(h, prior, items, priorNotes[h]));
                 })
                 .toList();
     }
@@ -99,6 +99,12 @@ public class DiagnosisService {
         }
         return new NextCheckView(c.code(), c.title(), c.minutes(), c.outcomes(), c.bypass(), c.instructions(),
                 c.cautions().stream().map(code -> catalogue.cautions().get(code)).toList(), plan.why());
+    }
+
+    private static List<String> assumptions(RuleOutcome outcome, Priors priors) {
+        List<String> out = new ArrayList<>(outcome.assumptions().stream().map(Assumption::text).distinct().toList());
+        out.add(priors.basis());
+        return out;
     }
 
     /** Situation cautions first (site procedures leads), then those of the next check, each once. */
