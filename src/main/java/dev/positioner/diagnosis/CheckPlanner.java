@@ -20,11 +20,19 @@ public final class CheckPlanner {
     private final Catalogue catalogue;
     private final double stopThreshold;
     private final double bypassPenalty;
+    private final double minimumGain;
 
-    public CheckPlanner(Catalogue catalogue, double stopThreshold, double bypassPenaltyMinutes) {
+    /**
+     * @param minimumGain fraction of the expected cost now that a check must save to be worth
+     *        proposing (the paper observes whenever ECO < ECR; the margin keeps the planner from
+     *        proposing a 5-minute check that nudges the leader across the threshold and saves nothing
+     *        a technician would notice). A modelling choice, configurable.
+     */
+    public CheckPlanner(Catalogue catalogue, double stopThreshold, double bypassPenaltyMinutes, double minimumGain) {
         this.catalogue = catalogue;
         this.stopThreshold = stopThreshold;
         this.bypassPenalty = bypassPenaltyMinutes;
+        this.minimumGain = minimumGain;
     }
 
     public CheckPlan plan(double[] p, Set<String> done, Set<String> unavailable) {
@@ -43,7 +51,7 @@ public final class CheckPlanner {
             if (done.contains(check.code())) {
                 continue;
             }
-            double[][] table = table(check, hypotheses);
+            double[][] table = Likelihoods.ofCheck(catalogue, check);
             if (!canChangeDecision(p, leader, table)) {
                 continue;
             }
@@ -52,6 +60,9 @@ public final class CheckPlanner {
                 continue;
             }
             double eco = ExpectedCost.eco(p, repair, cost(check), table);
+            if (eco > ecrNow * (1 - minimumGain)) {
+                continue;
+            }
             if (eco < bestEco) {
                 bestEco = eco;
                 best = check;
@@ -59,7 +70,9 @@ public final class CheckPlanner {
         }
         if (best == null) {
             String reason = blocked.isEmpty()
-                    ? "No remaining check could change which cause to act on; act on the leading cause."
+                    ? String.format(Locale.ROOT, "No remaining check could change which cause to act on at a cost worth paying; "
+                            + "act on the leading cause, %s (expected cost to finish acting in order: %.0f min).",
+                            hypotheses.get(leader).code(), ecrNow)
                     : "The only checks that could change the decision are marked unavailable: " + String.join(", ", blocked) + ".";
             return stop(reason, ecrNow);
         }
@@ -68,19 +81,6 @@ public final class CheckPlanner {
 
     public double cost(CheckDef check) {
         return check.minutes() + (check.bypass() ? bypassPenalty : 0);
-    }
-
-    static double[][] table(CheckDef check, List<Fault> hypotheses) {
-        double[][] table = new double[check.outcomes().size()][hypotheses.size()];
-        for (int k = 0; k < table.length; k++) {
-            String outcome = check.outcomes().get(k);
-            for (int h = 0; h < hypotheses.size(); h++) {
-                Fault f = hypotheses.get(h);
-                // The unlisted cause says nothing about a catalogued check: every outcome equally likely.
-                table[k][h] = h == hypotheses.size() - 1 ? 1.0 / table.length : check.likelihood(outcome, f.code());
-            }
-        }
-        return table;
     }
 
     private boolean canChangeDecision(double[] p, int leader, double[][] table) {
@@ -98,7 +98,7 @@ public final class CheckPlanner {
     }
 
     private String why(CheckDef check, double[] p, List<Fault> hypotheses, double ecrNow, double eco) {
-        double[][] table = table(check, hypotheses);
+        double[][] table = Likelihoods.ofCheck(catalogue, check);
         double[][] after = new double[table.length][];
         for (int k = 0; k < table.length; k++) {
             after[k] = Bayes.update(p, table[k]);

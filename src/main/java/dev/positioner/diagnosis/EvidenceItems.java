@@ -52,10 +52,7 @@ final class EvidenceItems {
                     || outcome.explanation("check:" + o.check()).isPresent()) {
                 continue;
             }
-            double[] l = new double[hypotheses.size()];
-            for (int h = 0; h < l.length; h++) {
-                l[h] = h == l.length - 1 ? 1.0 / check.outcomes().size() : check.likelihood(o.outcome(), hypotheses.get(h).code());
-            }
+            double[] l = Likelihoods.ofOutcome(catalogue, check, o.outcome());
             items.add(new EvidenceItem(observationLabel(check, o, readings), l));
         }
         for (Evidence e : outcome.evidence()) {
