@@ -3,7 +3,14 @@ package dev.positioner.asset;
 import dev.positioner.diagnosis.DiagnosisRequest.MeasurementInput;
 import java.util.List;
 
-/** A registered valve: tag, where it is, and its design data in the units it was recorded in. */
-public record AssetRecord(String tag, String description, String area, String oilGrade, String cleanlinessTarget,
-        List<MeasurementInput> design) {
+/**
+ * A registered valve: tag, where it is, and its design data in the units it was recorded in.
+ * {@code site} groups valves whose closures are pooled for learning (empty: the installation).
+ */
+public record AssetRecord(String tag, String description, String area, String site, String oilGrade,
+        String cleanlinessTarget, List<MeasurementInput> design) {
+
+    public AssetRecord {
+        design = design == null ? List.of() : List.copyOf(design);
+    }
 }
