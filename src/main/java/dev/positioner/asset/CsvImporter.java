@@ -27,6 +27,7 @@ import java.util.regex.Pattern;
 @ApplicationScoped
 public class CsvImporter {
 
+    @com.fasterxml.jackson.annotation.JsonInclude(com.fasterxml.jackson.annotation.JsonInclude.Include.NON_NULL)
     public record Rejected(int row, String tag, List<FieldError> errors) {
     }
 

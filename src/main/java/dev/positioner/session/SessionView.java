@@ -14,6 +14,7 @@ public record SessionView(String id, String tag, String workOrder, String status
         int lastSeq, SessionEvent event, List<SessionEvent> events, DiagnosisResponse diagnosis, ClosureRecord closure) {
 
     /** One line of a list: no events, no diagnosis. */
+    @JsonInclude(JsonInclude.Include.NON_NULL)
     public record Summary(String id, String tag, String workOrder, String status, String openedBy, Instant openedAt,
             int lastSeq, String confirmedFault) {
     }
