@@ -2,6 +2,7 @@ package dev.positioner.api;
 
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonMappingException;
+import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 import jakarta.ws.rs.core.Response;
 import jakarta.ws.rs.ext.ExceptionMapper;
 import jakarta.ws.rs.ext.Provider;
@@ -15,8 +16,21 @@ import java.util.stream.Collectors;
 @Provider
 public class JsonProblemMapper implements ExceptionMapper<JsonProcessingException> {
 
+    /** Wrong JSON types; registered on its own because the framework maps this type itself otherwise. */
+    @Provider
+    public static class MismatchedInput implements ExceptionMapper<MismatchedInputException> {
+        @Override
+        public Response toResponse(MismatchedInputException e) {
+            return problem(e);
+        }
+    }
+
     @Override
     public Response toResponse(JsonProcessingException e) {
+        return problem(e);
+    }
+
+    static Response problem(JsonProcessingException e) {
         String field = "$";
         if (e instanceof JsonMappingException mapping && !mapping.getPath().isEmpty()) {
             field = mapping.getPath().stream()

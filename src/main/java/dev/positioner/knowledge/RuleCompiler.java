@@ -26,14 +26,18 @@ import org.kie.api.definition.rule.Rule;
 final class RuleCompiler {
 
     static final Pattern RULE_ID = Pattern.compile("^([A-Z]+(?:-[A-Z0-9]+)*-\\d{2,3}) .+");
+    private static final Pattern CAUTION = Pattern.compile("new Caution\\(\"([^\"]*)\"\\)");
     private static final Pattern PACKAGE = Pattern.compile("(?m)^\\s*package\\s+([\\w.]+)\\s*;?");
 
     private final Path rulesDir;
     private final List<KnowledgeProblem> problems;
+    private final java.util.Set<String> cautionCodes;
 
-    RuleCompiler(Path rulesDir, List<KnowledgeProblem> problems) {
+    /** @param cautionCodes the caution codes of the catalogue, which rules may insert */
+    RuleCompiler(Path rulesDir, List<KnowledgeProblem> problems, java.util.Set<String> cautionCodes) {
         this.rulesDir = rulesDir;
         this.problems = problems;
+        this.cautionCodes = cautionCodes;
     }
 
     KieBase compile() {
@@ -44,6 +48,7 @@ final class RuleCompiler {
                 String relative = rulesDir.relativize(drl).toString().replace('\\', '/');
                 String text = Files.readString(drl);
                 checkPackage(relative, text);
+                checkCautions(relative, text);
                 files.write("src/main/resources/" + relative, text);
             }
         } catch (IOException e) {
@@ -72,6 +77,20 @@ final class RuleCompiler {
         if (!found.equals(expected)) {
             problems.add(new KnowledgeProblem("rules/" + relative, 1, null,
                     "package '" + found + "' must match its folder '" + expected + "'"));
+        }
+    }
+
+    /** A rule that inserts an unknown caution would show the technician a bare code; catch it at start-up. */
+    private void checkCautions(String relative, String text) {
+        String[] lines = text.split("\n", -1);
+        for (int i = 0; i < lines.length; i++) {
+            Matcher m = CAUTION.matcher(lines[i]);
+            while (m.find()) {
+                if (!cautionCodes.contains(m.group(1))) {
+                    problems.add(new KnowledgeProblem("rules/" + relative, i + 1, null,
+                            "caution '" + m.group(1) + "' is not in rules/catalogue/cautions.yaml"));
+                }
+            }
         }
     }
 

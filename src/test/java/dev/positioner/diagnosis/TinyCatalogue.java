@@ -1,0 +1,39 @@
+package dev.positioner.diagnosis;
+
+import dev.positioner.knowledge.Catalogue;
+import dev.positioner.knowledge.CheckDef;
+import dev.positioner.knowledge.Fault;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/** A two-fault catalogue small enough to compute by hand, for planner tests. */
+final class TinyCatalogue {
+
+    private TinyCatalogue() {
+    }
+
+    static Fault fault(String code, double prior, double repair) {
+        return new Fault(code, code, "test", prior, "OTH", "6.4 Unknown", "", repair, "repair " + code, List.of("from_memory"));
+    }
+
+    /** P(a | f0), P(a | f1); the unlisted cause takes the prior-weighted mean. */
+    static CheckDef check(String code, double minutes, boolean bypass, double aGivenF0, double aGivenF1) {
+        return new CheckDef(code, code, minutes, bypass, List.of("a", "b"), List.of("do it"), List.of(),
+                Map.of("a", 0.5, "b", 0.5),
+                Map.of("f0", Map.of("a", aGivenF0, "b", 1 - aGivenF0), "f1", Map.of("a", aGivenF1, "b", 1 - aGivenF1)),
+                List.of("from_memory"));
+    }
+
+    static Catalogue of(CheckDef... checks) {
+        Map<String, Fault> faults = new LinkedHashMap<>();
+        faults.put("f0", fault("f0", 0.594, 100));
+        faults.put("f1", fault("f1", 0.396, 80));
+        Map<String, CheckDef> byCode = new LinkedHashMap<>();
+        for (CheckDef c : checks) {
+            byCode.put(c.code(), c);
+        }
+        return new Catalogue(faults, fault("not_in_catalogue", 0.01, 240), 0.15, Map.of(), byCode, Map.of(),
+                Map.of(), Map.of(), Map.of());
+    }
+}
