@@ -61,9 +61,10 @@ public class DiagnosisService {
         facts.addAll(input.checks());
         facts.addAll(input.assumptions());
         facts.addAll(NormalBands.facts(input.asset()));
+        Map<String, Reading> readings = input.readings().stream().collect(Collectors.toMap(Reading::quantity, Function.identity()));
+        facts.addAll(EngineeringFindings.facts(input.asset(), readings));
         RuleOutcome outcome = engine.evaluate(facts);
 
-        Map<String, Reading> readings = input.readings().stream().collect(Collectors.toMap(Reading::quantity, Function.identity()));
         List<EvidenceItem> items = EvidenceItems.from(catalogue, outcome, readings);
         List<Fault> hypotheses = catalogue.hypotheses();
         Priors priors = priorSource.priors(catalogue, input.asset());

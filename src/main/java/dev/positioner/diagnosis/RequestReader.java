@@ -11,6 +11,8 @@ import dev.positioner.diagnosis.facts.Assumption;
 import dev.positioner.diagnosis.facts.Observation;
 import dev.positioner.diagnosis.facts.Reading;
 import dev.positioner.diagnosis.facts.ReportedSymptom;
+import dev.positioner.hydraulics.Iso4406;
+import dev.positioner.hydraulics.IsoVgGrade;
 import dev.positioner.knowledge.Catalogue;
 import dev.positioner.knowledge.CheckDef;
 import dev.positioner.measure.QuantityDef;
@@ -23,19 +25,12 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
-import java.util.regex.Pattern;
 
 /**
  * Validates a diagnosis request against the catalogue and converts it to facts. It collects every
  * error with its JSON path before failing, so a client fixes its request in one round.
  */
 final class RequestReader {
-
-    /** ISO 3448 viscosity grades (kinematic viscosity at 40 degC, mm2/s). */
-    static final Set<String> ISO_VG = Set.of("VG2", "VG3", "VG5", "VG7", "VG10", "VG15", "VG22", "VG32", "VG46",
-            "VG68", "VG100", "VG150", "VG220", "VG320", "VG460", "VG680", "VG1000", "VG1500");
-    /** ISO 4406 three-part code; scale numbers run from 0 to 28 (ISO 4406:2021 Table 1, ">28" aside). */
-    static final Pattern ISO4406 = Pattern.compile("(\\d{1,2})/(\\d{1,2})/(\\d{1,2})");
 
     private final Catalogue catalogue;
     private final AssetDirectory assets;
@@ -160,8 +155,13 @@ final class RequestReader {
         registered.ifPresent(r -> convertDesign(r.design(), "registry " + r.tag() + " design", design, false));
         convertDesign(input.design(), "asset.design", design, true);
         String grade = input.oilGrade() != null ? input.oilGrade() : registered.map(AssetRecord::oilGrade).orElse(null);
-        if (grade != null && !ISO_VG.contains(grade)) {
-            errors.add(new FieldError("asset.oilGrade", "'" + grade + "' is not an ISO 3448 grade such as VG46"));
+        if (grade != null && !validGrade(grade)) {
+            errors.add(new FieldError("asset.oilGrade", "'" + grade + "' is not an ISO 3448 grade from VG10 to VG150, such as VG46"));
+        }
+        Double bore = design.get("piston_bore");
+        Double rod = design.get("rod_diameter");
+        if (bore != null && rod != null && rod >= bore) {
+            errors.add(new FieldError("asset.design", "rod_diameter must be smaller than piston_bore"));
         }
         String target = input.cleanlinessTarget() != null ? input.cleanlinessTarget()
                 : registered.map(AssetRecord::cleanlinessTarget).orElse(null);
@@ -184,16 +184,21 @@ final class RequestReader {
     }
 
     static boolean validIso4406(String code) {
-        var m = ISO4406.matcher(code);
-        if (!m.matches()) {
+        try {
+            Iso4406.parse(code);
+            return true;
+        } catch (IllegalArgumentException e) {
             return false;
         }
-        for (int g = 1; g <= 3; g++) {
-            if (Integer.parseInt(m.group(g)) > 28) {
-                return false;
-            }
+    }
+
+    static boolean validGrade(String grade) {
+        try {
+            IsoVgGrade.parse(grade);
+            return true;
+        } catch (IllegalArgumentException e) {
+            return false;
         }
-        return true;
     }
 
     private static void each(List<String> codes, String name, java.util.function.BiConsumer<String, String> action) {
