@@ -14,7 +14,9 @@ package dev.positioner.trace;
  * has passed a small band of the new sign, so measurement noise near zero cannot split one
  * half-period into many short ones. Period and amplitude are not part of Hägglund's detector;
  * they are read here from the same half-cycles (mean duration x 2, mean positive plus mean
- * negative peak).
+ * negative peak), counting only half-cycles from the moment the episode was called
+ * oscillating when there are at least four of those, so a lone disturbance that opened the
+ * episode does not skew them.
  */
 final class HagglundDetector {
 
@@ -39,13 +41,45 @@ final class HagglundDetector {
     private boolean oscillating;
     private double epStart;
     private double epEnd;
-    private int events;
-    private double sumHalf;
-    private double sumPos;
-    private int nPos;
-    private double sumNeg;
-    private int nNeg;
+    private final Stats all = new Stats();
+    private final Stats sinceDetection = new Stats();
     private Episode best;
+
+    /** Running sums of half-cycle durations and peaks. */
+    private static final class Stats {
+        int events;
+        double sumHalf;
+        double sumPos;
+        int nPos;
+        double sumNeg;
+        int nNeg;
+
+        void clear() {
+            events = 0;
+            sumHalf = sumPos = sumNeg = 0;
+            nPos = nNeg = 0;
+        }
+
+        void add(double half, int sign, double peak) {
+            events++;
+            sumHalf += half;
+            if (sign > 0) {
+                sumPos += peak;
+                nPos++;
+            } else {
+                sumNeg += peak;
+                nNeg++;
+            }
+        }
+
+        double period() {
+            return 2 * sumHalf / events;
+        }
+
+        double peakToPeak() {
+            return (nPos > 0 ? sumPos / nPos : 0) + (nNeg > 0 ? sumNeg / nNeg : 0);
+        }
+    }
 
     HagglundDetector(double amplitude, double ultimatePeriod, double supervisionTime,
                      int limitCount, double band) {
@@ -94,20 +128,13 @@ final class HagglundDetector {
             open = true;
             oscillating = false;
             epStart = halfStart;
-            events = 0;
-            sumHalf = 0;
-            sumPos = sumNeg = 0;
-            nPos = nNeg = 0;
+            all.clear();
+            sinceDetection.clear();
         }
-        events++;
         epEnd = t;
-        sumHalf += t - halfStart;
-        if (sign > 0) {
-            sumPos += peak;
-            nPos++;
-        } else {
-            sumNeg += peak;
-            nNeg++;
+        all.add(t - halfStart, sign, peak);
+        if (oscillating) {
+            sinceDetection.add(t - halfStart, sign, peak);
         }
         if (x > nLim) {
             oscillating = true;
@@ -130,8 +157,8 @@ final class HagglundDetector {
         if (!open) {
             return null;
         }
-        double p2p = (nPos > 0 ? sumPos / nPos : 0) + (nNeg > 0 ? sumNeg / nNeg : 0);
-        return new Episode(epStart, epEnd, events, 2 * sumHalf / events, p2p, oscillating);
+        Stats st = sinceDetection.events >= 4 ? sinceDetection : all;
+        return new Episode(epStart, epEnd, all.events, st.period(), st.peakToPeak(), oscillating);
     }
 
     /** Forgets the current half-cycle and count, as after an input change; keeps the best. */

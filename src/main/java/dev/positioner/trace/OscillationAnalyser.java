@@ -5,11 +5,13 @@ package dev.positioner.trace;
  * load-disturbance counting ({@link HagglundDetector}; T. Hägglund, Control Engineering
  * Practice 3(11), 1995).
  *
- * <p>The control error is input minus position with its slow mean removed (exponential mean of
- * time constant five reference periods), so a calibration offset between input and position
- * does not hide the zero crossings. Whenever the input leaves a band of
- * {@code steadyInputBandPercent} around its value at the last reset, the detector restarts:
- * this analysis is only about oscillation the input did not ask for. O(1) memory.
+ * <p>The control error is input minus position with its slow mean removed, so a calibration
+ * offset between input and position does not hide the zero crossings. The mean starts as a
+ * running average and becomes an exponential mean of time constant five reference periods once
+ * that many samples are in. Whenever the input leaves a band of {@code steadyInputBandPercent}
+ * around its value at the last restart, the detector restarts and then waits one reference
+ * period, so the position's response to the input change is not counted as hunting: this
+ * analysis is only about oscillation the input did not ask for. O(1) memory.
  */
 public final class OscillationAnalyser implements SampleConsumer {
 
@@ -19,6 +21,9 @@ public final class OscillationAnalyser implements SampleConsumer {
     private double inputRef = Double.NaN;
     private double bias;
     private double lastT;
+    private double holdUntil;
+    private boolean started;
+    private long meanCount;
 
     public OscillationAnalyser(TraceAnalysisOptions options) {
         this.o = options;
@@ -34,13 +39,25 @@ public final class OscillationAnalyser implements SampleConsumer {
         double raw = s.input() - s.position();
         if (Double.isNaN(inputRef) || Math.abs(s.input() - inputRef) > o.steadyInputBandPercent()) {
             inputRef = s.input();
-            bias = raw;
-            lastT = s.time();
+            holdUntil = s.time() + o.referencePeriodSeconds();
             detector.reset();
+            started = false;
+            return;
+        }
+        if (s.time() < holdUntil) {
+            return;
+        }
+        if (!started) {
+            started = true;
+            bias = raw;
+            meanCount = 1;
+            lastT = s.time();
             detector.update(s.time(), 0);
             return;
         }
-        bias += (raw - bias) * Math.min(1, (s.time() - lastT) / meanTau);
+        meanCount++;
+        double alpha = Math.max(1.0 / meanCount, Math.min(1, (s.time() - lastT) / meanTau));
+        bias += (raw - bias) * alpha;
         lastT = s.time();
         detector.update(s.time(), raw - bias);
     }

@@ -23,7 +23,8 @@ class OscillationAnalyserTest {
         assertEquals(8.0, r.periodSeconds(), 0.05);
         // a sample lands within 0.1 s of each peak: amplitude loss 2(1 - cos(2 pi 0.1/8)) < 0.01
         assertEquals(4.0, r.peakToPeakPercent(), 0.02);
-        assertTrue(r.windowStart() < 8, r.toString());
+        // the detector waits one reference period (10 s) after the input first appears
+        assertTrue(r.windowStart() >= 10 && r.windowStart() < 20, r.toString());
         assertTrue(r.windowEnd() > 590, r.toString());
     }
 
@@ -73,5 +74,27 @@ class OscillationAnalyserTest {
                     out.accept(Sample.of(s.time(), u, s.position() + u - 50));
                 }));
         assertFalse(r.detected(), r.toString());
+    }
+
+    @Test
+    void huntingAfterAStepIsTimedFromWhenItStarts() {
+        // a 10 % step at 90 s answered by a 1.5 s lag, then hunting (9 s, 1.5 % amplitude) from
+        // 150 s to 380 s. The hold-off after the input change keeps the step response out of
+        // the count, so the window and the period belong to the hunting alone.
+        OscillationAnalyser a = new OscillationAnalyser(TraceAnalysisOptions.defaults());
+        double y = 45;
+        for (int k = 0; k < 2500; k++) {
+            double t = k * 0.2;
+            double u = t < 90 ? 45 : 55;
+            y += (u - y) * 0.2 / 1.5;
+            double hunt = t > 150 && t < 380 ? 1.5 * Math.sin(2 * Math.PI * (t - 150) / 9) : 0;
+            a.accept(Sample.of(t, u, y + hunt));
+        }
+        OscillationResult r = a.finish();
+        assertTrue(r.detected(), r.toString());
+        assertEquals(9.0, r.periodSeconds(), 0.1);
+        assertEquals(3.0, r.peakToPeakPercent(), 0.05);
+        assertTrue(r.windowStart() >= 150 && r.windowStart() < 160, r.toString());
+        assertTrue(r.windowEnd() > 370 && r.windowEnd() <= 385, r.toString());
     }
 }
