@@ -15,6 +15,11 @@ import java.util.List;
  * still coasting on is not mistaken for one that has not yet reversed; the lag itself still adds
  * about ramp rate x time constant, which is why the standard asks for slow ramps.
  *
+ * <p>Reversals and the position's return are tracked on 4-sample moving means of input and
+ * position: a noisy position drifts by several sigma over the seconds it sits in the dead band,
+ * and a raw sample could pass for movement. Both signals are averaged over the same window, so
+ * on a ramp the averaging shifts them together and adds no bias to the travel measured.
+ *
  * <p>Up and down curves are kept as per-bin sums over 0.5 % input bins from -25 to 125 %, so
  * memory is fixed whatever the trace length. A sample joins a curve only while the input is
  * advancing past its previous extreme in that direction. Jumps larger than the step threshold
@@ -28,7 +33,15 @@ public final class DeadBandAnalyser implements SampleConsumer {
     static final int MIN_OVERLAP_BINS = 10;
     static final int MAX_KEPT = 50;
 
+    static final int SMOOTH = 4;
+
     private final TraceAnalysisOptions o;
+    private final double[] ringU = new double[SMOOTH];
+    private final double[] ringY = new double[SMOOTH];
+    private int ringN;
+    private int ringPos;
+    private double ringSumU;
+    private double ringSumY;
     private final double[][] sumU = new double[2][BINS];
     private final double[][] sumY = new double[2][BINS];
     private final int[][] count = new int[2][BINS];
@@ -93,19 +106,36 @@ public final class DeadBandAnalyser implements SampleConsumer {
 
     @Override
     public void accept(Sample s) {
-        double u = s.input();
-        double y = s.position();
+        double rawU = s.input();
+        double rawY = s.position();
         double t = s.time();
-        if (!started || Math.abs(u - prevU) > o.stepThresholdPercent()) {
+        if (!started || Math.abs(rawU - prevU) > o.stepThresholdPercent()) {
             started = true;
-            prevU = u;
+            prevU = rawU;
             dir = 0;
-            extU = u;
+            ringN = 0;
+            ringSumU = ringSumY = 0;
             cand.active = false;
             open.active = false;
+        }
+        prevU = rawU;
+        if (ringN == SMOOTH) {
+            ringSumU -= ringU[ringPos];
+            ringSumY -= ringY[ringPos];
+        } else {
+            ringN++;
+        }
+        ringU[ringPos] = rawU;
+        ringY[ringPos] = rawY;
+        ringSumU += rawU;
+        ringSumY += rawY;
+        ringPos = (ringPos + 1) % SMOOTH;
+        if (ringN < SMOOTH) {
+            extU = ringSumU / ringN;
             return;
         }
-        prevU = u;
+        double u = ringSumU / SMOOTH;
+        double y = ringSumY / SMOOTH;
         double obs = o.observableChangePercent();
         if (open.active && open.track(u, y, obs)) {
             commit(open);
@@ -120,7 +150,7 @@ public final class DeadBandAnalyser implements SampleConsumer {
         }
         if (dir * (u - extU) >= 0) {
             newExtreme(u, t, y);
-            add(dir, u, y);
+            add(dir, rawU, rawY);
             return;
         }
         cand.track(u, y, obs);

@@ -45,27 +45,47 @@ final class LineSource {
                 }
                 break;
             }
-            char c = buf[pos++];
             any = true;
-            if (c == '\n') {
-                break;
+            // scan the buffer for the terminator and copy the run in one go
+            int start = pos;
+            while (pos < len && buf[pos] != '\n' && buf[pos] != '\r') {
+                pos++;
             }
-            if (c == '\r') {
-                if (pos == len) {
-                    fill();
-                }
-                if (pos < len && buf[pos] == '\n') {
-                    pos++;
-                }
-                break;
-            }
-            if (line.length() >= maxLineChars) {
+            if (line.length() + (pos - start) > maxLineChars) {
                 throw new TraceFormatException(lineNumber + 1, null, "line longer than "
                         + maxLineChars + " characters; is this a trace file?");
             }
-            line.append(c);
+            if (pos == len) {
+                line.append(buf, start, pos - start); // line continues in the next fill
+                continue;
+            }
+            char c = buf[pos++];
+            lineNumber++;
+            if (c == '\r') {
+                if (pos == len) {
+                    line.append(buf, start, pos - 1 - start);
+                    fill();
+                    if (pos < len && buf[pos] == '\n') {
+                        pos++;
+                    }
+                    return line.toString();
+                }
+                if (buf[pos] == '\n') {
+                    pos++;
+                }
+                return finish(start, pos - (buf[pos - 1] == '\n' ? 2 : 1));
+            }
+            return finish(start, pos - 1);
         }
         lineNumber++;
+        return line.toString();
+    }
+
+    private String finish(int start, int end) {
+        if (line.length() == 0) {
+            return new String(buf, start, end - start);
+        }
+        line.append(buf, start, end - start);
         return line.toString();
     }
 

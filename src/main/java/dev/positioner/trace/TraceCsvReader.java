@@ -137,7 +137,7 @@ public final class TraceCsvReader {
         }
         double v;
         try {
-            v = Double.parseDouble(cell);
+            v = FastDecimal.parse(cell);
         } catch (NumberFormatException e) {
             throw new TraceFormatException(row, column, "'" + cell + "' is not a number"
                     + (cell.indexOf(',') >= 0 ? " (decimal commas are not supported)" : ""));

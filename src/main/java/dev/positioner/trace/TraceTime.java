@@ -28,7 +28,7 @@ final class TraceTime {
         }
         if (!iso) {
             try {
-                return Double.parseDouble(cell);
+                return FastDecimal.parse(cell);
             } catch (NumberFormatException e) {
                 throw new TraceFormatException(row, column, "'" + cell + "' is not a number of "
                         + "seconds, and earlier rows used seconds");

@@ -31,7 +31,8 @@ class DeadBandAnalyserTest {
         assertEquals(0.0, r.terminalLinearityPercent(), 0.02);
         assertEquals(10.0, r.rangeLowPercent(), 0.5);
         assertEquals(90.0, r.rangeHighPercent(), 0.5);
-        assertEquals(90.0, r.measured().get(0).input(), 0.02); // first reversal at the top
+        // first reversal at the top; the 4-sample moving mean rounds the apex off by 0.02 %
+        assertEquals(90.0, r.measured().get(0).input(), 0.03);
     }
 
     @Test
@@ -52,14 +53,15 @@ class DeadBandAnalyserTest {
         // position = input + 2 sin(pi (input - 10) / 80) on 10..90 %: 2 % of bow. The line
         // through the ends misses the middle by the bow less its value at the ends; the minimax
         // line halves that. The ends used: the up curve starts only once the input has moved
-        // the 0.5 % reversal threshold, so the first shared bin is centred on 10.75 %, and one
-        // more bin is trimmed at each end (dead band plus a bin), leaving 11.75..88.25 %, where
-        // the bow is 2 sin(pi 1.75 / 80) = 0.137 %.
+        // the 0.5 % reversal threshold, so the first shared bin is centred on 10.75 %, and the
+        // dead band plus one bin is trimmed at each end, leaving ends 1.25 to 1.75 % inside the
+        // ramp range, where the bow is 2 sin(pi 1.25 / 80) = 0.098 to 0.137 %.
         DeadBandResult r = analyse(out -> SyntheticTraces.backlashRamps(0.2, 10, 90, 0.2, 1, 0,
                 x -> x + 2 * Math.sin(Math.PI * (x - 10) / 80), 0, 1, out));
         assertNotNull(r.terminalLinearityPercent(), r.toString());
-        assertEquals(2 - 2 * Math.sin(Math.PI * 1.75 / 80), r.terminalLinearityPercent(), 0.005,
-                r.toString());
+        double term = r.terminalLinearityPercent();
+        assertTrue(term >= 2 - 2 * Math.sin(Math.PI * 1.75 / 80) - 0.005
+                && term <= 2 - 2 * Math.sin(Math.PI * 1.25 / 80) + 0.005, r.toString());
         assertEquals(r.terminalLinearityPercent() / 2, r.independentLinearityPercent(), 0.01);
         assertEquals(0.0, r.deadBandPercent(), 0.05);
     }
@@ -100,7 +102,34 @@ class DeadBandAnalyserTest {
         // only the second reversal (at 59 %) is measured, and it is right that it reads 1 %:
         // the dip never took up the slack on the down side, so only half the backlash remains
         assertEquals(1, r.measured().size(), r.toString());
-        assertEquals(59.0, r.measured().get(0).input(), 1e-6);
+        assertEquals(59.0, r.measured().get(0).input(), 0.03); // apex of the moving mean
         assertEquals(1.0, r.deadBandPercent(), 0.05);
+    }
+
+    @Test
+    void laggingNoisyPositionerStillShowsItsBacklash() {
+        // 2 % backlash, then a 1.5 s first-order lag; ramps at 0.2 %/s; noise sigma 0.03 % on
+        // input and 0.05 % on position. The lag smears the onset of movement over about
+        // rate x tau = 0.3 % of input, which bounds the error of the extrapolated onset.
+        java.util.Random rnd = new java.util.Random(21);
+        DeadBandAnalyser a = new DeadBandAnalyser(TraceAnalysisOptions.defaults());
+        double x = 54;
+        double y = 54;
+        for (int k = 0; k < 20_000; k++) {
+            double t = k * 0.2;
+            double ph = (t % 400) / 200;
+            double u = ph <= 1 ? 55 - 40 * ph : 15 + 40 * (ph - 1);
+            if (u > x + 1) {
+                x = u - 1;
+            } else if (u < x - 1) {
+                x = u + 1;
+            }
+            y += (x - y) * 0.2 / 1.5;
+            a.accept(Sample.of(t, u + 0.03 * rnd.nextGaussian(), y + 0.05 * rnd.nextGaussian()));
+        }
+        DeadBandResult r = a.finish();
+        assertTrue(r.reversals() >= 19, r.toString());
+        assertEquals(2.0, r.deadBandPercent(), 0.3, r.toString());
+        assertTrue(r.deadBandMaxPercent() < 2.6, r.toString());
     }
 }

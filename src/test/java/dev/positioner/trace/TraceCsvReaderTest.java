@@ -242,4 +242,57 @@ class TraceCsvReaderTest {
         assertEquals("input", e.column());
         assertThrows(TraceFormatException.class, () -> gate.finish(2));
     }
+
+    /** Hands out at most {@code chunk} characters a read, to put buffer edges everywhere. */
+    private static final class ChunkedReader extends java.io.Reader {
+        private final String text;
+        private final int chunk;
+        private int pos;
+
+        ChunkedReader(String text, int chunk) {
+            this.text = text;
+            this.chunk = chunk;
+        }
+
+        @Override
+        public int read(char[] cbuf, int off, int len) {
+            if (pos >= text.length()) {
+                return -1;
+            }
+            int n = Math.min(Math.min(len, chunk), text.length() - pos);
+            text.getChars(pos, pos + n, cbuf, off);
+            pos += n;
+            return n;
+        }
+
+        @Override
+        public void close() {
+        }
+    }
+
+    @Test
+    void linesSplitAcrossReadsAreReassembledForEveryLineEnding() {
+        for (String eol : new String[] {"\n", "\r\n", "\r"}) {
+            for (int chunk : new int[] {1, 2, 3, 7, 64}) {
+                got.clear();
+                StringBuilder b = new StringBuilder("t,input,position").append(eol);
+                for (int i = 0; i < 300; i++) {
+                    b.append(i).append(",").append(i % 100).append(".25,").append(i % 50)
+                            .append(eol);
+                }
+                new TraceCsvReader().read(new ChunkedReader(b.toString(), chunk), got::add);
+                assertEquals(300, got.size(), eol.replace("\r", "CR") + " chunk " + chunk);
+                for (int i = 0; i < 300; i++) {
+                    assertEquals(i, got.get(i).time(), 0);
+                    assertEquals(i % 100 + 0.25, got.get(i).input(), 0);
+                    assertEquals(i % 50, got.get(i).position(), 0);
+                }
+            }
+        }
+        // and row numbers stay right across the edges
+        String bad = csv("t,input,position", 40, 30, "6.0,50,oops").replace("\n", "\r\n");
+        TraceFormatException e = assertThrows(TraceFormatException.class, () ->
+                new TraceCsvReader().read(new ChunkedReader(bad, 5), got::add));
+        assertEquals(32, e.row());
+    }
 }

@@ -59,10 +59,15 @@ class TraceSvgTest {
 
     @Test
     void deadBandIsAnnotatedAndReversalsRinged() throws Exception {
-        String svg = render(out -> SyntheticTraces.backlashRamps(0.2, 10, 90, 0.1, 2, 2.0,
-                x -> x, 0, 1, out));
+        TraceAnalyser a = new TraceAnalyser(TraceAnalysisOptions.defaults());
+        PlotDecimator p = new PlotDecimator();
+        SyntheticTraces.backlashRamps(0.2, 10, 90, 0.1, 2, 2.0, x -> x, 0, 1, a.andThen(p));
+        TraceAnalysis result = a.finish();
+        String svg = TraceSvg.render(p.finish(), result);
         parse(svg);
-        assertTrue(svg.contains("dead band 2.0"), "annotation");
+        // the value itself is checked in DeadBandAnalyserTest; here, that it is written out
+        assertTrue(svg.contains(String.format(java.util.Locale.ROOT, "dead band %.2f %%",
+                result.deadBand().deadBandPercent())), "annotation");
         assertEquals(3, count(svg, "class=\"reversal\""));
     }
 
