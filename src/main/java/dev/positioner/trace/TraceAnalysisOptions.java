@@ -40,6 +40,35 @@ public record TraceAnalysisOptions(
         double steadyInputBandPercent, int correlationWindowSamples,
         double correlationBlockSeconds) {
 
+    public TraceAnalysisOptions {
+        positive("stepThresholdPercent", stepThresholdPercent);
+        positive("stepMaxRiseSamples", stepMaxRiseSamples);
+        positive("stepMinHoldSamples", stepMinHoldSamples);
+        positive("stepMaxResponseSamples", stepMaxResponseSamples);
+        positive("settlingBandFraction", settlingBandFraction);
+        positive("deadTimeFraction", deadTimeFraction);
+        positive("reversalThresholdPercent", reversalThresholdPercent);
+        positive("observableChangePercent", observableChangePercent);
+        positive("oscillationAmplitudePercent", oscillationAmplitudePercent);
+        positive("referencePeriodSeconds", referencePeriodSeconds);
+        positive("oscillationLimitCount", oscillationLimitCount);
+        positive("supervisionPeriods", supervisionPeriods);
+        positive("zeroCrossingBandPercent", zeroCrossingBandPercent);
+        positive("steadyInputBandPercent", steadyInputBandPercent);
+        positive("correlationWindowSamples", correlationWindowSamples);
+        positive("correlationBlockSeconds", correlationBlockSeconds);
+        if (settlingBandFraction >= 1 || deadTimeFraction >= 1) {
+            throw new IllegalArgumentException("settlingBandFraction and deadTimeFraction are "
+                    + "fractions of the position change and must be below 1");
+        }
+    }
+
+    private static void positive(String name, double v) {
+        if (!(v > 0) || Double.isInfinite(v)) {
+            throw new IllegalArgumentException(name + " must be a positive number, not " + v);
+        }
+    }
+
     public static TraceAnalysisOptions defaults() {
         return new TraceAnalysisOptions(0.5, 3, 10, 4096, 0.02, 0.01, 0.5, 0.2,
                 1.0, 10.0, 10, 50.0, 0.2, 0.5, 4096, 0.2);

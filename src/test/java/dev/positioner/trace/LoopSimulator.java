@@ -21,7 +21,7 @@ final class LoopSimulator {
      * J the slip jump, both % of span. The valve sticks whenever the input stops or reverses; it
      * breaks free once the input has moved S from the sticking point after a reversal (J when
      * continuing the same way), then follows at x - d (S - J) / 2 for direction d. This is a
-     * simplified re-statement for test data, not a transcription of the published algorithm.
+     * simplified re-statement for test data, not a line-by-line copy of the published algorithm.
      */
     static final class StickSlipValve implements Valve {
         private final double s;

@@ -58,4 +58,14 @@ class TraceAnalyserTest {
         assertEquals(3.0, r.deadBand().deadBandPercent(), 0.15, r.deadBand().toString());
         assertTrue(r.deadBand().reversals() > 80);
     }
+
+    @Test
+    void optionsRefuseNonsense() {
+        org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                () -> TraceAnalysisOptions.defaults().withReferencePeriodSeconds(0));
+        org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                () -> TraceAnalysisOptions.defaults().withObservableChangePercent(Double.NaN));
+        assertEquals(20.0, TraceAnalysisOptions.defaults().withReferencePeriodSeconds(20)
+                .referencePeriodSeconds(), 0);
+    }
 }
