@@ -44,13 +44,13 @@ public class DiagnosisService {
     public DiagnosisService(KnowledgeBase knowledge, RuleEngine engine, AssetDirectory assets, PriorSource priorSource,
             @ConfigProperty(name = "positioner.stop-threshold") double stopThreshold,
             @ConfigProperty(name = "positioner.bypass-penalty-minutes") double bypassPenalty,
-            @ConfigProperty(name = "positioner.minimum-gain") double minimumGain) {
+            @ConfigProperty(name = "positioner.minimum-outcome-chance") double minimumChance) {
         this.catalogue = knowledge.catalogue();
         this.engine = engine;
         this.assets = assets;
         this.priorSource = priorSource;
         this.stopThreshold = stopThreshold;
-        this.planner = new CheckPlanner(catalogue, stopThreshold, bypassPenalty, minimumGain);
+        this.planner = new CheckPlanner(catalogue, stopThreshold, bypassPenalty, minimumChance);
     }
 
     public DiagnosisResponse diagnose(DiagnosisRequest request) {

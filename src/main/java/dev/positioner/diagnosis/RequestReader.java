@@ -16,12 +16,11 @@ import dev.positioner.hydraulics.IsoVgGrade;
 import dev.positioner.knowledge.Catalogue;
 import dev.positioner.knowledge.CheckDef;
 import dev.positioner.measure.QuantityDef;
-import dev.positioner.measure.UnitConverter;
+import dev.positioner.measure.QuantityReader;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
@@ -99,27 +98,12 @@ final class RequestReader {
             errors.add(new FieldError(field, "must be an object with quantity, value and unit"));
             return null;
         }
-        QuantityDef def = m.quantity() == null ? null : defs.get(m.quantity());
-        if (def == null) {
-            errors.add(new FieldError(field + ".quantity", m.quantity() == null ? "is required"
-                    : "unknown quantity '" + m.quantity() + "'"));
+        QuantityReader reader = new QuantityReader(defs, errors);
+        double value = reader.read(field, m.quantity(), m.value(), m.unit(), strokeM);
+        if (Double.isNaN(value)) {
             return null;
         }
-        if (m.value() == null || !Double.isFinite(m.value())) {
-            errors.add(new FieldError(field + ".value", m.value() == null ? "is required" : "must be a finite number"));
-            return null;
-        }
-        if (m.unit() == null || !def.accepts(m.unit())) {
-            errors.add(new FieldError(field + ".unit", (m.unit() == null ? "is required" : "unit '" + m.unit()
-                    + "' is not accepted") + " for " + def.code() + "; use one of " + def.units()));
-            return null;
-        }
-        double value = UnitConverter.toCanonical(def, m.value(), m.unit(), strokeM);
-        if (value < def.min() || value > def.max()) {
-            errors.add(new FieldError(field + ".value", String.format(Locale.ROOT,
-                    "%s %s is not a possible %s", m.value(), m.unit(), def.code().replace('_', ' '))));
-            return null;
-        }
+        QuantityDef def = reader.def(m.quantity());
         return new Reading(def.code(), value, def.kind().canonicalUnit(), m.value(), m.unit());
     }
 
