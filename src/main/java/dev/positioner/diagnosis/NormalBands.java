@@ -97,10 +97,19 @@ final class NormalBands {
                     + ": assumed ISO VG46 for the working temperature band."));
             grade = DEFAULT_GRADE;
         }
-        double cold = temperatureAt(grade, MAX_WORKING_CST);
-        double hot = Math.min(OIL_HOT_DEGC, temperatureAt(grade, MIN_WORKING_CST));
-        return new Band("oil_temperature", cold, hot, "degC", String.format(Locale.ROOT,
-                "%s between 100 and 10 mm2/s, ASTM D341 with VI 100", grade.name()));
+        return OIL_BANDS.get(grade);
+    }
+
+    /** The band depends on the grade only, so it is solved once per grade rather than per request. */
+    private static final java.util.Map<IsoVgGrade, Band> OIL_BANDS = new java.util.EnumMap<>(IsoVgGrade.class);
+
+    static {
+        for (IsoVgGrade grade : IsoVgGrade.values()) {
+            double cold = temperatureAt(grade, MAX_WORKING_CST);
+            double hot = Math.min(OIL_HOT_DEGC, temperatureAt(grade, MIN_WORKING_CST));
+            OIL_BANDS.put(grade, new Band("oil_temperature", cold, hot, "degC", String.format(Locale.ROOT,
+                    "%s between 100 and 10 mm2/s, ASTM D341 with VI 100", grade.name())));
+        }
     }
 
     /** Solves viscosity(t) = target by bisection; viscosity falls monotonically with temperature. */
