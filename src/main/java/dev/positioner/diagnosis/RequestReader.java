@@ -8,12 +8,18 @@ import dev.positioner.diagnosis.DiagnosisRequest.AssetInput;
 import dev.positioner.diagnosis.DiagnosisRequest.CheckInput;
 import dev.positioner.diagnosis.DiagnosisRequest.MeasurementInput;
 import dev.positioner.diagnosis.facts.Assumption;
+import dev.positioner.diagnosis.facts.Finding;
 import dev.positioner.diagnosis.facts.Observation;
+import dev.positioner.diagnosis.facts.TraceVerdict;
 import dev.positioner.diagnosis.facts.Reading;
 import dev.positioner.diagnosis.facts.ReportedSymptom;
 import dev.positioner.hydraulics.Iso4406;
 import dev.positioner.hydraulics.IsoVgGrade;
 import dev.positioner.knowledge.Catalogue;
+import dev.positioner.trace.TraceAnalysis;
+import dev.positioner.trace.TraceFindings;
+import dev.positioner.trace.TraceRecord;
+import dev.positioner.trace.TraceStore;
 import dev.positioner.knowledge.CheckDef;
 import dev.positioner.measure.QuantityDef;
 import dev.positioner.measure.QuantityReader;
@@ -33,12 +39,16 @@ final class RequestReader {
 
     private final Catalogue catalogue;
     private final AssetDirectory assets;
+    private final TraceStore traces;
     private final List<FieldError> errors = new ArrayList<>();
     private final List<Assumption> assumptions = new ArrayList<>();
+    private final List<Object> traceFacts = new ArrayList<>();
 
-    RequestReader(Catalogue catalogue, AssetDirectory assets) {
+    /** @param traces where uploaded traces are found; null when the service runs without one */
+    RequestReader(Catalogue catalogue, AssetDirectory assets, TraceStore traces) {
         this.catalogue = catalogue;
         this.assets = assets;
+        this.traces = traces;
     }
 
     DiagnosisInput read(DiagnosisRequest request) {
@@ -49,6 +59,7 @@ final class RequestReader {
         double stroke = Optional.ofNullable(asset.value("stroke_length")).orElse(NormalBands.DEFAULT_STROKE_M);
         List<ReportedSymptom> symptoms = symptoms(request);
         List<Reading> readings = readings(request.measurements(), stroke);
+        readings.addAll(fromTraces(request.traces(), readings));
         List<Observation> checks = checks(request.checks());
         Set<String> unavailable = new LinkedHashSet<>();
         each(request.unavailableChecks(), "unavailableChecks", (code, field) -> {
@@ -60,7 +71,34 @@ final class RequestReader {
         if (!errors.isEmpty()) {
             throw new InvalidRequestException(errors);
         }
-        return new DiagnosisInput(symptoms, readings, checks, unavailable, asset, assumptions);
+        List<Assumption> all = new ArrayList<>(assumptions);
+        return new DiagnosisInput(symptoms, readings, checks, unavailable, asset, all, traceFacts);
+    }
+
+    /** Trace metrics as readings in percent or seconds, unless the same quantity was measured by hand. */
+    private List<Reading> fromTraces(List<String> ids, List<Reading> byHand) {
+        List<Reading> out = new ArrayList<>();
+        for (int i = 0; ids != null && i < ids.size(); i++) {
+            String id = ids.get(i);
+            Optional<TraceRecord> trace = traces == null || id == null ? Optional.empty() : traces.find(id);
+            if (trace.isEmpty()) {
+                errors.add(new FieldError("traces[" + i + "]", "no uploaded trace '" + id + "'"));
+                continue;
+            }
+            TraceAnalysis a = trace.get().analysis();
+            TraceFindings.measurements(a).forEach((quantity, value) -> {
+                boolean known = byHand.stream().anyMatch(r -> r.quantity().equals(quantity))
+                        || out.stream().anyMatch(r -> r.quantity().equals(quantity));
+                if (!known) {
+                    String unit = quantity.equals("oscillation_period") ? "s" : "percent";
+                    out.add(new Reading(quantity, value, unit, value, unit));
+                }
+            });
+            traceFacts.add(new TraceVerdict(id, a.stiction() == null ? "CANNOT_TELL" : a.stiction().verdict().name(),
+                    a.oscillation() != null && a.oscillation().detected()));
+            TraceFindings.sentences(a).forEach(text -> traceFacts.add(Finding.note("trace", "Trace " + id + ": " + text)));
+        }
+        return out;
     }
 
     private List<ReportedSymptom> symptoms(DiagnosisRequest request) {
