@@ -81,6 +81,12 @@ final class EngineeringFindings {
             return;
         }
         double rod = asset.value("rod_diameter") == null ? 0 : asset.value("rod_diameter");
+        if (asset.value("rod_diameter") == null) {
+            facts.add(new Assumption("No rod diameter given: the thrust is for the full bore, as if the piston had no rod."));
+        }
+        if (!readings.containsKey("drain_pressure")) {
+            facts.add(new Assumption("No drain pressure reading: the thrust is worked out with the drain at zero."));
+        }
         Reading supply = readings.get("supply_pressure");
         double supplyPa = supply != null ? supply.value() : nominalSupply();
         double drainPa = readings.containsKey("drain_pressure") ? readings.get("drain_pressure").value() : 0;

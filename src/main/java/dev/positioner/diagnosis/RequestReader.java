@@ -57,6 +57,11 @@ final class RequestReader {
         }
         AssetSpec asset = asset(request.asset());
         double stroke = Optional.ofNullable(asset.value("stroke_length")).orElse(NormalBands.DEFAULT_STROKE_M);
+        boolean creepInPercent = request.measurements() != null && request.measurements().stream()
+                .anyMatch(m -> m != null && "creep_rate".equals(m.quantity()) && "percent_per_min".equals(m.unit()));
+        if (creepInPercent && asset.value("stroke_length") == null) {
+            assumptions.add(new Assumption("No stroke length given: a creep rate in percent per minute was converted with a 150 mm stroke."));
+        }
         List<ReportedSymptom> symptoms = symptoms(request);
         List<Reading> readings = readings(request.measurements(), stroke);
         readings.addAll(fromTraces(request.traces(), readings));
