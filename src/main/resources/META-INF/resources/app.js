@@ -666,7 +666,7 @@
       $('outcomes').replaceChildren(...next.outcomes.map((o, i) => el('button', {
         type: 'button', class: 'btn outcome' + (i === 0 ? ' usual' : ''), 'data-outcome': o, disabled: locked,
         onclick: () => answer(next.check, o)
-      }, [el('span', { text: humanise(o) }), i === 0 ? el('small', { text: 'the normal result' }) : null])));
+      }, [el('span', { text: humanise(o) }), i === 0 && o !== 'normal' ? el('small', { text: 'the normal result' }) : null])));
       $('cant-do').disabled = stale;
       $('cant-do').onclick = () => setAside(next.check);
       $('check-why').textContent = plain(next.why);
