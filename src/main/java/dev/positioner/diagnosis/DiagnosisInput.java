@@ -9,5 +9,5 @@ import java.util.Set;
 
 /** A request that has passed validation, converted to facts in canonical units. */
 public record DiagnosisInput(List<ReportedSymptom> symptoms, List<Reading> readings, List<Observation> checks,
-        Set<String> unavailableChecks, AssetSpec asset, List<Assumption> assumptions) {
+        Set<String> unavailableChecks, AssetSpec asset, List<Assumption> assumptions, List<Object> traceFacts) {
 }

@@ -5,10 +5,16 @@ import java.util.List;
 /**
  * The one-shot request (see the contract in openapi/openapi.yaml). Symptoms listed are present;
  * {@code absentSymptoms} are those the client has looked for and not found. A symptom in neither
- * list is unknown and does not count either way.
+ * list is unknown and does not count either way. {@code traces} are ids of uploaded traces whose
+ * metrics count as measurements (a measurement sent by hand wins over the same one from a trace).
  */
 public record DiagnosisRequest(List<String> symptoms, List<String> absentSymptoms, List<MeasurementInput> measurements,
-        List<CheckInput> checks, List<String> unavailableChecks, AssetInput asset) {
+        List<CheckInput> checks, List<String> unavailableChecks, AssetInput asset, List<String> traces) {
+
+    public DiagnosisRequest(List<String> symptoms, List<String> absentSymptoms, List<MeasurementInput> measurements,
+            List<CheckInput> checks, List<String> unavailableChecks, AssetInput asset) {
+        this(symptoms, absentSymptoms, measurements, checks, unavailableChecks, asset, null);
+    }
 
     public record MeasurementInput(String quantity, Double value, String unit) {
     }

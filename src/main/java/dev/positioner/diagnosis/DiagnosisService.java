@@ -13,7 +13,9 @@ import dev.positioner.knowledge.Catalogue;
 import dev.positioner.knowledge.CheckDef;
 import dev.positioner.knowledge.Fault;
 import dev.positioner.knowledge.KnowledgeBase;
+import dev.positioner.trace.TraceStore;
 import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.inject.Inject;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.LinkedHashSet;
@@ -44,26 +46,32 @@ public class DiagnosisService {
     public DiagnosisService(KnowledgeBase knowledge, RuleEngine engine, AssetDirectory assets, PriorSource priorSource,
             @ConfigProperty(name = "positioner.stop-threshold") double stopThreshold,
             @ConfigProperty(name = "positioner.bypass-penalty-minutes") double bypassPenalty,
-            @ConfigProperty(name = "positioner.minimum-gain") double minimumGain) {
+            @ConfigProperty(name = "positioner.minimum-outcome-chance") double minimumChance) {
         this.catalogue = knowledge.catalogue();
         this.engine = engine;
         this.assets = assets;
         this.priorSource = priorSource;
         this.stopThreshold = stopThreshold;
-        this.planner = new CheckPlanner(catalogue, stopThreshold, bypassPenalty, minimumGain);
+        this.planner = new CheckPlanner(catalogue, stopThreshold, bypassPenalty, minimumChance);
     }
 
+    /** Optional: without a trace store (a service built outside the container) traces cannot be referenced. */
+    @Inject
+    TraceStore traces;
+
     public DiagnosisResponse diagnose(DiagnosisRequest request) {
-        DiagnosisInput input = new RequestReader(catalogue, assets).read(request);
+        DiagnosisInput input = new RequestReader(catalogue, assets, traces).read(request);
         List<Object> facts = new ArrayList<>();
         facts.addAll(input.symptoms());
         facts.addAll(input.readings());
         facts.addAll(input.checks());
         facts.addAll(input.assumptions());
+        facts.addAll(input.traceFacts());
         facts.addAll(NormalBands.facts(input.asset()));
+        Map<String, Reading> readings = input.readings().stream().collect(Collectors.toMap(Reading::quantity, Function.identity()));
+        facts.addAll(EngineeringFindings.facts(input.asset(), readings));
         RuleOutcome outcome = engine.evaluate(facts);
 
-        Map<String, Reading> readings = input.readings().stream().collect(Collectors.toMap(Reading::quantity, Function.identity()));
         List<EvidenceItem> items = EvidenceItems.from(catalogue, outcome, readings);
         List<Fault> hypotheses = catalogue.hypotheses();
         Priors priors = priorSource.priors(catalogue, input.asset());

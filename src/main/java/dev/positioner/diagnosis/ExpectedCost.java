@@ -1,8 +1,5 @@
 package dev.positioner.diagnosis;
 
-import java.util.Arrays;
-import java.util.Comparator;
-import java.util.stream.IntStream;
 
 /**
  * Expected cost of repair (ECR) of the single-fault troubleshooting model of Heckerman, Breese and
@@ -42,8 +39,21 @@ public final class ExpectedCost {
 
     /** Hypothesis indices in repair order: p / C descending. */
     public static Integer[] order(double[] p, double[] repairCost) {
-        Integer[] order = IntStream.range(0, p.length).boxed().toArray(Integer[]::new);
-        Arrays.sort(order, Comparator.comparingDouble((Integer i) -> -p[i] / repairCost[i]));
+        // Insertion sort of a few dozen indices: the planner calls this a hundred times per request.
+        int n = p.length;
+        Integer[] order = new Integer[n];
+        double[] key = new double[n];
+        for (int i = 0; i < n; i++) {
+            double k = p[i] / repairCost[i];
+            int j = i;
+            while (j > 0 && key[j - 1] < k) {
+                key[j] = key[j - 1];
+                order[j] = order[j - 1];
+                j--;
+            }
+            key[j] = k;
+            order[j] = i;
+        }
         return order;
     }
 }

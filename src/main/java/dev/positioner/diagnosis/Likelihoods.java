@@ -31,12 +31,20 @@ final class Likelihoods {
         return l;
     }
 
-    /** [outcome][hypothesis] table of a check, for the planner's look-ahead. */
+    /**
+     * [outcome][hypothesis] table of a check, for the planner's look-ahead. The catalogue never
+     * changes while the service runs, so each table is built once; callers must not modify it.
+     */
     static double[][] ofCheck(Catalogue catalogue, CheckDef check) {
-        double[][] table = new double[check.outcomes().size()][];
-        for (int k = 0; k < table.length; k++) {
-            table[k] = ofOutcome(catalogue, check, check.outcomes().get(k));
-        }
-        return table;
+        return TABLES.computeIfAbsent(check, c -> {
+            double[][] table = new double[c.outcomes().size()][];
+            for (int k = 0; k < table.length; k++) {
+                table[k] = ofOutcome(catalogue, c, c.outcomes().get(k));
+            }
+            return table;
+        });
     }
+
+    private static final java.util.Map<CheckDef, double[][]> TABLES =
+            java.util.Collections.synchronizedMap(new java.util.IdentityHashMap<>());
 }

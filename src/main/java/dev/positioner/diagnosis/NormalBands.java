@@ -2,10 +2,16 @@ package dev.positioner.diagnosis;
 
 import dev.positioner.diagnosis.facts.Assumption;
 import dev.positioner.diagnosis.facts.Band;
+import dev.positioner.diagnosis.facts.Calculated;
 import dev.positioner.diagnosis.facts.Design;
+import dev.positioner.hydraulics.ActuatorPerformance;
+import dev.positioner.hydraulics.IsoVgGrade;
+import dev.positioner.hydraulics.OilViscosity;
+import dev.positioner.hydraulics.SupplyBand;
 import dev.positioner.measure.UnitConverter;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 /**
  * The normal band of each reading for one valve, from its design data or stated defaults. These are
@@ -16,14 +22,20 @@ final class NormalBands {
 
     /** Typical plant supply for this class of positioner (base vocabulary note). */
     static final double DEFAULT_SUPPLY_PSI = 250;
-    /** ±10 % around nominal: common practice for a regulated hydraulic supply, not from a standard. */
-    static final double SUPPLY_TOLERANCE = 0.10;
+    /** ±10 % around nominal: common practice for a regulated hydraulic supply (see SupplyBand). */
+    static final double SUPPLY_TOLERANCE = SupplyBand.DEFAULT_BAND;
     /** Filter element change-out about 2/3 of a 25 psid bypass setting (from memory: filter makers' guidance). */
     static final double FILTER_DP_HIGH_PSI = 15;
     /** A free-draining return should read a few psi at most (from memory). */
     static final double DRAIN_HIGH_PSI = 5;
-    /** Working band for mineral hydraulic oil of grades VG32-VG68 (common practice); refined by viscosity later. */
-    static final double OIL_COLD_DEGC = 15, OIL_HOT_DEGC = 65;
+    /**
+     * Oil is too cold to work well above 100 mm2/s and too thin below 10 mm2/s: the operating range
+     * makers of servo and proportional valves commonly recommend (from memory). Mineral oil over
+     * about 65 degC ages fast (common practice), whatever its viscosity.
+     */
+    static final double MAX_WORKING_CST = 100, MIN_WORKING_CST = 10, OIL_HOT_DEGC = 65;
+    /** Grade assumed when none is given: the most common grade in such systems (from memory). */
+    static final IsoVgGrade DEFAULT_GRADE = IsoVgGrade.VG46;
     /** A stroke half as long again as design is clearly slow (common practice). */
     static final double STROKE_SLOW_FACTOR = 1.5;
     /** Creep above 0.5 % of travel per minute at steady signal is abnormal (from memory). */
@@ -46,7 +58,7 @@ final class NormalBands {
         List<Object> facts = new ArrayList<>();
         double supplyPa = designOr(asset, "supply_pressure_nominal", psi(DEFAULT_SUPPLY_PSI), facts,
                 "Supply nominal not given: assumed 250 psi (17.2 bar), the usual plant value.");
-        String supplyBasis = String.format(java.util.Locale.ROOT, "nominal %.0f psi ±10 %%, common practice",
+        String supplyBasis = String.format(Locale.ROOT, "nominal %.0f psi ±10 %%, common practice",
                 UnitConverter.convert(supplyPa, "Pa", "psi"));
         facts.add(new Band("supply_pressure", supplyPa * (1 - SUPPLY_TOLERANCE), supplyPa * (1 + SUPPLY_TOLERANCE),
                 "Pa", supplyBasis));
@@ -55,22 +67,14 @@ final class NormalBands {
                 "change-out at about 2/3 of a 25 psid bypass, from memory"));
         facts.add(new Band("drain_pressure", Double.NaN, psi(DRAIN_HIGH_PSI), "Pa",
                 "a free-draining return reads a few psi at most, from memory"));
-        facts.add(new Band("oil_temperature", OIL_COLD_DEGC, OIL_HOT_DEGC, "degC",
-                "working band of mineral hydraulic oil VG32-VG68, common practice"));
+        facts.add(oilBand(asset, facts));
         facts.add(new Band("reservoir_level", LEVEL_LOW, LEVEL_HIGH, "percent", "sight-glass marks, from memory"));
         facts.add(new Band("water_content", Double.NaN, WATER_HIGH_PPM, "ppm", "free water likely above it, from memory"));
         facts.add(new Band("dead_band", Double.NaN, DEAD_BAND_HIGH, "percent", "common practice for hydraulic positioners"));
         double stroke = designOr(asset, "stroke_length", DEFAULT_STROKE_M, null, null);
         facts.add(new Band("creep_rate", Double.NaN, CREEP_PERCENT_PER_MIN / 100 * stroke / 60, "m_per_s",
                 "0.5 % of travel per minute, from memory"));
-        Double design = asset.value("design_stroke_time");
-        if (design != null) {
-            String basis = "1.5 x the design stroke time, common practice";
-            facts.add(new Band("stroke_time_open", Double.NaN, design * STROKE_SLOW_FACTOR, "s", basis));
-            facts.add(new Band("stroke_time_close", Double.NaN, design * STROKE_SLOW_FACTOR, "s", basis));
-        } else {
-            facts.add(new Assumption("No design stroke time given: measured stroke times are reported but not judged."));
-        }
+        strokeBands(asset, facts);
         Double rated = asset.value("pump_rated_flow");
         if (rated != null) {
             facts.add(new Band("pump_flow", rated * PUMP_FLOW_FRACTION, Double.NaN, "m3_per_s",
@@ -78,6 +82,72 @@ final class NormalBands {
         }
         asset.design().forEach((q, v) -> facts.add(new Design(q, v, false)));
         return facts;
+    }
+
+    /** The temperatures at which this grade leaves its working viscosity range (ASTM D341, VI 100). */
+    private static Band oilBand(AssetSpec asset, List<Object> facts) {
+        IsoVgGrade grade;
+        try {
+            grade = asset.oilGrade() == null ? null : IsoVgGrade.parse(asset.oilGrade());
+        } catch (IllegalArgumentException e) {
+            grade = null;
+        }
+        if (grade == null) {
+            facts.add(new Assumption("Oil grade " + (asset.oilGrade() == null ? "not given" : asset.oilGrade() + " outside VG10-VG150")
+                    + ": assumed ISO VG46 for the working temperature band."));
+            grade = DEFAULT_GRADE;
+        }
+        return OIL_BANDS.get(grade);
+    }
+
+    /** The band depends on the grade only, so it is solved once per grade rather than per request. */
+    private static final java.util.Map<IsoVgGrade, Band> OIL_BANDS = new java.util.EnumMap<>(IsoVgGrade.class);
+
+    static {
+        for (IsoVgGrade grade : IsoVgGrade.values()) {
+            double cold = temperatureAt(grade, MAX_WORKING_CST);
+            double hot = Math.min(OIL_HOT_DEGC, temperatureAt(grade, MIN_WORKING_CST));
+            OIL_BANDS.put(grade, new Band("oil_temperature", cold, hot, "degC", String.format(Locale.ROOT,
+                    "%s between 100 and 10 mm2/s, ASTM D341 with VI 100", grade.name())));
+        }
+    }
+
+    /** Solves viscosity(t) = target by bisection; viscosity falls monotonically with temperature. */
+    static double temperatureAt(IsoVgGrade grade, double targetCst) {
+        double lo = -40, hi = 200;
+        for (int i = 0; i < 60; i++) {
+            double mid = (lo + hi) / 2;
+            if (OilViscosity.viscosityAtCelsius(grade, mid) > targetCst) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return (lo + hi) / 2;
+    }
+
+    /**
+     * Stroke times are slow beyond 1.5 x the design time; without one, beyond 1.5 x the time the
+     * rated pump flow needs to fill the swept volume (a lower bound: the pilot spool may limit more).
+     */
+    private static void strokeBands(AssetSpec asset, List<Object> facts) {
+        Double design = asset.value("design_stroke_time");
+        String basis = "1.5 x the design stroke time, common practice";
+        if (design == null && asset.value("piston_bore") != null && asset.value("stroke_length") != null
+                && asset.value("pump_rated_flow") != null) {
+            double area = ActuatorPerformance.areas(asset.value("piston_bore"), 0).bore();
+            var expected = ActuatorPerformance.expectedStrokeTime(area, asset.value("stroke_length"),
+                    asset.value("pump_rated_flow"), Double.MAX_VALUE);
+            design = expected.seconds();
+            basis = String.format(Locale.ROOT, "1.5 x %.0f s, the swept volume over the rated pump flow", design);
+            facts.add(new Calculated("stroke_time_expected", design, "s"));
+        }
+        if (design == null) {
+            facts.add(new Assumption("No design stroke time (nor bore, stroke and pump flow) given: measured stroke times are reported but not judged."));
+            return;
+        }
+        facts.add(new Band("stroke_time_open", Double.NaN, design * STROKE_SLOW_FACTOR, "s", basis));
+        facts.add(new Band("stroke_time_close", Double.NaN, design * STROKE_SLOW_FACTOR, "s", basis));
     }
 
     private static double designOr(AssetSpec asset, String quantity, double fallback, List<Object> facts, String note) {

@@ -8,22 +8,28 @@ import dev.positioner.diagnosis.DiagnosisRequest.AssetInput;
 import dev.positioner.diagnosis.DiagnosisRequest.CheckInput;
 import dev.positioner.diagnosis.DiagnosisRequest.MeasurementInput;
 import dev.positioner.diagnosis.facts.Assumption;
+import dev.positioner.diagnosis.facts.Finding;
 import dev.positioner.diagnosis.facts.Observation;
+import dev.positioner.diagnosis.facts.TraceVerdict;
 import dev.positioner.diagnosis.facts.Reading;
 import dev.positioner.diagnosis.facts.ReportedSymptom;
+import dev.positioner.hydraulics.Iso4406;
+import dev.positioner.hydraulics.IsoVgGrade;
 import dev.positioner.knowledge.Catalogue;
+import dev.positioner.trace.TraceAnalysis;
+import dev.positioner.trace.TraceFindings;
+import dev.positioner.trace.TraceRecord;
+import dev.positioner.trace.TraceStore;
 import dev.positioner.knowledge.CheckDef;
 import dev.positioner.measure.QuantityDef;
-import dev.positioner.measure.UnitConverter;
+import dev.positioner.measure.QuantityReader;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
-import java.util.regex.Pattern;
 
 /**
  * Validates a diagnosis request against the catalogue and converts it to facts. It collects every
@@ -31,20 +37,18 @@ import java.util.regex.Pattern;
  */
 final class RequestReader {
 
-    /** ISO 3448 viscosity grades (kinematic viscosity at 40 degC, mm2/s). */
-    static final Set<String> ISO_VG = Set.of("VG2", "VG3", "VG5", "VG7", "VG10", "VG15", "VG22", "VG32", "VG46",
-            "VG68", "VG100", "VG150", "VG220", "VG320", "VG460", "VG680", "VG1000", "VG1500");
-    /** ISO 4406 three-part code; scale numbers run from 0 to 28 (ISO 4406:2021 Table 1, ">28" aside). */
-    static final Pattern ISO4406 = Pattern.compile("(\\d{1,2})/(\\d{1,2})/(\\d{1,2})");
-
     private final Catalogue catalogue;
     private final AssetDirectory assets;
+    private final TraceStore traces;
     private final List<FieldError> errors = new ArrayList<>();
     private final List<Assumption> assumptions = new ArrayList<>();
+    private final List<Object> traceFacts = new ArrayList<>();
 
-    RequestReader(Catalogue catalogue, AssetDirectory assets) {
+    /** @param traces where uploaded traces are found; null when the service runs without one */
+    RequestReader(Catalogue catalogue, AssetDirectory assets, TraceStore traces) {
         this.catalogue = catalogue;
         this.assets = assets;
+        this.traces = traces;
     }
 
     DiagnosisInput read(DiagnosisRequest request) {
@@ -53,8 +57,14 @@ final class RequestReader {
         }
         AssetSpec asset = asset(request.asset());
         double stroke = Optional.ofNullable(asset.value("stroke_length")).orElse(NormalBands.DEFAULT_STROKE_M);
+        boolean creepInPercent = request.measurements() != null && request.measurements().stream()
+                .anyMatch(m -> m != null && "creep_rate".equals(m.quantity()) && "percent_per_min".equals(m.unit()));
+        if (creepInPercent && asset.value("stroke_length") == null) {
+            assumptions.add(new Assumption("No stroke length given: a creep rate in percent per minute was converted with a 150 mm stroke."));
+        }
         List<ReportedSymptom> symptoms = symptoms(request);
         List<Reading> readings = readings(request.measurements(), stroke);
+        readings.addAll(fromTraces(request.traces(), readings));
         List<Observation> checks = checks(request.checks());
         Set<String> unavailable = new LinkedHashSet<>();
         each(request.unavailableChecks(), "unavailableChecks", (code, field) -> {
@@ -66,7 +76,34 @@ final class RequestReader {
         if (!errors.isEmpty()) {
             throw new InvalidRequestException(errors);
         }
-        return new DiagnosisInput(symptoms, readings, checks, unavailable, asset, assumptions);
+        List<Assumption> all = new ArrayList<>(assumptions);
+        return new DiagnosisInput(symptoms, readings, checks, unavailable, asset, all, traceFacts);
+    }
+
+    /** Trace metrics as readings in percent or seconds, unless the same quantity was measured by hand. */
+    private List<Reading> fromTraces(List<String> ids, List<Reading> byHand) {
+        List<Reading> out = new ArrayList<>();
+        for (int i = 0; ids != null && i < ids.size(); i++) {
+            String id = ids.get(i);
+            Optional<TraceRecord> trace = traces == null || id == null ? Optional.empty() : traces.find(id);
+            if (trace.isEmpty()) {
+                errors.add(new FieldError("traces[" + i + "]", "no uploaded trace '" + id + "'"));
+                continue;
+            }
+            TraceAnalysis a = trace.get().analysis();
+            TraceFindings.measurements(a).forEach((quantity, value) -> {
+                boolean known = byHand.stream().anyMatch(r -> r.quantity().equals(quantity))
+                        || out.stream().anyMatch(r -> r.quantity().equals(quantity));
+                if (!known) {
+                    String unit = quantity.equals("oscillation_period") ? "s" : "percent";
+                    out.add(new Reading(quantity, value, unit, value, unit));
+                }
+            });
+            traceFacts.add(new TraceVerdict(id, a.stiction() == null ? "CANNOT_TELL" : a.stiction().verdict().name(),
+                    a.oscillation() != null && a.oscillation().detected()));
+            TraceFindings.sentences(a).forEach(text -> traceFacts.add(Finding.note("trace", "Trace " + id + ": " + text)));
+        }
+        return out;
     }
 
     private List<ReportedSymptom> symptoms(DiagnosisRequest request) {
@@ -104,27 +141,12 @@ final class RequestReader {
             errors.add(new FieldError(field, "must be an object with quantity, value and unit"));
             return null;
         }
-        QuantityDef def = m.quantity() == null ? null : defs.get(m.quantity());
-        if (def == null) {
-            errors.add(new FieldError(field + ".quantity", m.quantity() == null ? "is required"
-                    : "unknown quantity '" + m.quantity() + "'"));
+        QuantityReader reader = new QuantityReader(defs, errors);
+        double value = reader.read(field, m.quantity(), m.value(), m.unit(), strokeM);
+        if (Double.isNaN(value)) {
             return null;
         }
-        if (m.value() == null || !Double.isFinite(m.value())) {
-            errors.add(new FieldError(field + ".value", m.value() == null ? "is required" : "must be a finite number"));
-            return null;
-        }
-        if (m.unit() == null || !def.accepts(m.unit())) {
-            errors.add(new FieldError(field + ".unit", (m.unit() == null ? "is required" : "unit '" + m.unit()
-                    + "' is not accepted") + " for " + def.code() + "; use one of " + def.units()));
-            return null;
-        }
-        double value = UnitConverter.toCanonical(def, m.value(), m.unit(), strokeM);
-        if (value < def.min() || value > def.max()) {
-            errors.add(new FieldError(field + ".value", String.format(Locale.ROOT,
-                    "%s %s is not a possible %s", m.value(), m.unit(), def.code().replace('_', ' '))));
-            return null;
-        }
+        QuantityDef def = reader.def(m.quantity());
         return new Reading(def.code(), value, def.kind().canonicalUnit(), m.value(), m.unit());
     }
 
@@ -160,8 +182,13 @@ final class RequestReader {
         registered.ifPresent(r -> convertDesign(r.design(), "registry " + r.tag() + " design", design, false));
         convertDesign(input.design(), "asset.design", design, true);
         String grade = input.oilGrade() != null ? input.oilGrade() : registered.map(AssetRecord::oilGrade).orElse(null);
-        if (grade != null && !ISO_VG.contains(grade)) {
-            errors.add(new FieldError("asset.oilGrade", "'" + grade + "' is not an ISO 3448 grade such as VG46"));
+        if (grade != null && !validGrade(grade)) {
+            errors.add(new FieldError("asset.oilGrade", "'" + grade + "' is not an ISO 3448 grade from VG10 to VG150, such as VG46"));
+        }
+        Double bore = design.get("piston_bore");
+        Double rod = design.get("rod_diameter");
+        if (bore != null && rod != null && rod >= bore) {
+            errors.add(new FieldError("asset.design", "rod_diameter must be smaller than piston_bore"));
         }
         String target = input.cleanlinessTarget() != null ? input.cleanlinessTarget()
                 : registered.map(AssetRecord::cleanlinessTarget).orElse(null);
@@ -184,16 +211,21 @@ final class RequestReader {
     }
 
     static boolean validIso4406(String code) {
-        var m = ISO4406.matcher(code);
-        if (!m.matches()) {
+        try {
+            Iso4406.parse(code);
+            return true;
+        } catch (IllegalArgumentException e) {
             return false;
         }
-        for (int g = 1; g <= 3; g++) {
-            if (Integer.parseInt(m.group(g)) > 28) {
-                return false;
-            }
+    }
+
+    static boolean validGrade(String grade) {
+        try {
+            IsoVgGrade.parse(grade);
+            return true;
+        } catch (IllegalArgumentException e) {
+            return false;
         }
-        return true;
     }
 
     private static void each(List<String> codes, String name, java.util.function.BiConsumer<String, String> action) {

@@ -44,10 +44,20 @@ public final class UnitConverter {
         if (fromUnit.equals(toUnit)) {
             return value;
         }
+        return CONVERTERS.computeIfAbsent(fromUnit + ">" + toUnit, key -> converter(fromUnit, toUnit)).convert(value);
+    }
+
+    /**
+     * Building a JSR 385 converter reduces unit products with exact rational arithmetic and was
+     * most of the time of a diagnosis; the pairs are few, so each is built once.
+     */
+    private static final Map<String, javax.measure.UnitConverter> CONVERTERS = new java.util.concurrent.ConcurrentHashMap<>();
+
+    private static javax.measure.UnitConverter converter(String fromUnit, String toUnit) {
         Unit<?> from = UnitCatalog.unit(fromUnit).orElseThrow(() -> unknown(fromUnit));
         Unit<?> to = UnitCatalog.unit(toUnit).orElseThrow(() -> unknown(toUnit));
         try {
-            return from.getConverterToAny(to).convert(value);
+            return from.getConverterToAny(to);
         } catch (IncommensurableException e) {
             throw new IllegalArgumentException("cannot convert " + fromUnit + " to " + toUnit);
         }

@@ -24,6 +24,11 @@ public final class Contract {
                             .withLevel("validation.request", ValidationReport.Level.IGNORE).build())
                     .build());
 
+    /** JSON numbers read as doubles, so closeTo(...) matchers compare like with like. */
+    public static final io.restassured.config.RestAssuredConfig DOUBLES = io.restassured.config.RestAssuredConfig.config()
+            .jsonConfig(io.restassured.config.JsonConfig.jsonConfig()
+                    .numberReturnType(io.restassured.path.json.config.JsonPathConfig.NumberReturnType.DOUBLE));
+
     private Contract() {
     }
 }

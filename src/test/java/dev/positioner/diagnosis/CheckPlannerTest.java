@@ -49,9 +49,19 @@ class CheckPlannerTest {
     }
 
     @Test
-    void aCheckThatCostsMoreThanItSavesIsNotProposed() {
-        // A slow, barely informative check: ECO exceeds ECR, so acting on the causes is better.
-        Catalogue c = TinyCatalogue.of(TinyCatalogue.check("slow_and_vague", 90, false, 0.6, 0.4));
+    void aCheckDearerThanTryingTheRepairIsStillProposedButSaysSo() {
+        // A slow, vague check: ECO is above ECR, so by expected cost alone one would try the
+        // repair of the cause with the best probability per minute first; the reason says so.
+        Catalogue c = TinyCatalogue.of(TinyCatalogue.check("slow_and_vague", 90, false, 0.8, 0.2));
+        CheckPlan plan = new CheckPlanner(c, 0.9, 30, 0.05).plan(P, Set.of(), Set.of());
+        assertTrue(plan.expectedCostWithCheck() >= plan.expectedCostNow());
+        assertTrue(plan.why().contains("trying the repair for f0"), plan.why());
+    }
+
+    @Test
+    void aCheckThatCannotChangeTheDecisionIsNotProposed() {
+        // Both faults give the same outcomes: no outcome can change the leader or lift it to 0.9.
+        Catalogue c = TinyCatalogue.of(TinyCatalogue.check("blind", 2, false, 0.5, 0.5));
         CheckPlan plan = new CheckPlanner(c, 0.9, 30, 0.05).plan(P, Set.of(), Set.of());
         assertNull(plan.check());
         assertTrue(plan.stopReason().startsWith("No remaining check"), plan.stopReason());

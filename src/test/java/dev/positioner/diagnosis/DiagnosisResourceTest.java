@@ -66,19 +66,19 @@ class DiagnosisResourceTest {
     }
 
     @Test
-    void stopsWhenNoCheckIsWorthItsCost() {
+    void stopsWhenTheLeaderIsClear() {
         given().filter(Contract.VALIDATED).contentType(ContentType.JSON)
                 .body("""
-                        {"symptoms": ["wrong_direction"],
+                        {"symptoms": ["wrong_direction", "recent_maintenance"],
                          "checks": [{"check": "check_port_connections", "outcome": "reversed"},
                                     {"check": "check_valve_lineup", "outcome": "as_required"},
                                     {"check": "inspect_cam_and_cable", "outcome": "secure"}]}""")
                 .post("/api/v1/diagnoses")
                 .then().statusCode(200)
                 .body("hypotheses[0].fault", equalTo("ports_reversed"))
-                .body("hypotheses[0].probability", greaterThanOrEqualTo(0.8f))
+                .body("hypotheses[0].probability", greaterThanOrEqualTo(0.9f))
                 .body("nextCheck", nullValue())
-                .body("decision.stopReason", containsString("act on the leading cause, ports_reversed"));
+                .body("decision.stopReason", containsString("stopping threshold"));
     }
 
     @Test

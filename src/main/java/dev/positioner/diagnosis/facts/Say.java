@@ -41,6 +41,14 @@ public final class Say {
                 fmt(deviation)), deviation, "percent", "within ±2 % of span");
     }
 
+    public static Finding positionError(Reading input, Reading position) {
+        double error = position.value() - input.value();
+        return new Finding("position_error", String.format(Locale.ROOT,
+                "With %s at the positioner the stem sits at %s: %s %% of travel off (more than 2 %% counts).",
+                show(input.givenValue(), input.givenUnit()), show(position.givenValue(), position.givenUnit()), fmt(error)),
+                error, "percent", "within ±2 % of travel");
+    }
+
     /** The band in the technician's unit; an open side is written as "at most" / "at least". */
     public static String band(Reading r, Band b) {
         String unit = r.givenUnit();

@@ -1,0 +1,208 @@
+package dev.positioner.diagnosis;
+
+import dev.positioner.diagnosis.facts.Assumption;
+import dev.positioner.diagnosis.facts.Calculated;
+import dev.positioner.diagnosis.facts.Finding;
+import dev.positioner.diagnosis.facts.Reading;
+import dev.positioner.hydraulics.ActuatorPerformance;
+import dev.positioner.hydraulics.BulkModulus;
+import dev.positioner.hydraulics.HydraulicNaturalFrequency;
+import dev.positioner.hydraulics.Iso4406;
+import dev.positioner.hydraulics.IsoVgGrade;
+import dev.positioner.hydraulics.Leakage;
+import dev.positioner.hydraulics.LineLoss;
+import dev.positioner.hydraulics.OilViscosity;
+import dev.positioner.measure.UnitConverter;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/**
+ * What the readings mean by calculation, for this valve: the drain-line drop thick oil would cause,
+ * the thrust the measured supply can make, the ISO 4406 code of a particle count, the leakage a
+ * creep rate implies, pump efficiency and the actuator's hydraulic natural frequency. Each result
+ * is a {@link Finding} for the technician and, where a rule needs it, a {@link Calculated} fact.
+ * The methods and their sources are in {@code dev.positioner.hydraulics}.
+ */
+final class EngineeringFindings {
+
+    /** Tangent bulk modulus of mineral hydraulic oil, about 1.5 GPa (from memory; data sheets give 1.4-1.8). */
+    static final double OIL_BULK_MODULUS = 1.5e9;
+    /** Free air assumed when judging whether air could make the actuator resonate: 1 % by volume (from memory, a badly aerated oil). */
+    static final double AIR_FRACTION = 0.01;
+    static final double ATMOSPHERE = 101_325;
+
+    private final AssetSpec asset;
+    private final Map<String, Reading> readings;
+    private final List<Object> facts = new ArrayList<>();
+
+    private EngineeringFindings(AssetSpec asset, Map<String, Reading> readings) {
+        this.asset = asset;
+        this.readings = readings;
+    }
+
+    static List<Object> facts(AssetSpec asset, Map<String, Reading> readings) {
+        EngineeringFindings f = new EngineeringFindings(asset, readings);
+        f.drainLine();
+        f.thrust();
+        f.cleanliness();
+        f.leakage();
+        f.pumpEfficiency();
+        f.naturalFrequency();
+        return f.facts;
+    }
+
+    /** Hagen-Poiseuille or Darcy-Weisbach at the measured oil temperature and full pump flow. */
+    private void drainLine() {
+        Reading t = readings.get("oil_temperature");
+        Double bore = asset.value("drain_line_bore");
+        Double length = asset.value("drain_line_length");
+        Double flow = flowForReturn();
+        if (t == null || bore == null || length == null || flow == null) {
+            return;
+        }
+        IsoVgGrade grade = grade();
+        double nu = OilViscosity.viscosityAtCelsius(grade, t.value());
+        LineLoss.Result r = LineLoss.pressureDrop(flow, bore, length, nu, OilViscosity.densityAtCelsius(t.value()));
+        facts.add(new Calculated("drain_drop_expected", r.pressureDrop(), "Pa"));
+        facts.add(new Calculated("oil_viscosity", nu, "cSt"));
+        facts.add(new Finding("drain_drop_expected", String.format(Locale.ROOT,
+                "At %s the %s oil is about %.0f mm2/s; at full pump flow the return line would drop %s (%s, Re %.0f, %s).",
+                Facts.show(t), grade.name(), nu, Facts.pressure(r.pressureDrop()), r.method().name().toLowerCase(Locale.ROOT).replace('_', ' '),
+                r.reynolds(), r.regime().name().toLowerCase(Locale.ROOT)), UnitConverter.convert(r.pressureDrop(), "Pa", "psi"), "psi", null));
+    }
+
+    /** Thrust from (supply - drain) over the piston, against what the valve needs. */
+    private void thrust() {
+        Double bore = asset.value("piston_bore");
+        Double required = asset.value("required_thrust");
+        if (bore == null || required == null) {
+            return;
+        }
+        double rod = asset.value("rod_diameter") == null ? 0 : asset.value("rod_diameter");
+        if (asset.value("rod_diameter") == null) {
+            facts.add(new Assumption("No rod diameter given: the thrust is for the full bore, as if the piston had no rod."));
+        }
+        if (!readings.containsKey("drain_pressure")) {
+            facts.add(new Assumption("No drain pressure reading: the thrust is worked out with the drain at zero."));
+        }
+        Reading supply = readings.get("supply_pressure");
+        double supplyPa = supply != null ? supply.value() : nominalSupply();
+        double drainPa = readings.containsKey("drain_pressure") ? readings.get("drain_pressure").value() : 0;
+        var areas = ActuatorPerformance.areas(bore, rod);
+        var thrust = ActuatorPerformance.thrust(supplyPa, drainPa, areas);
+        double weakest = Math.min(thrust.extend(), rod > 0 ? thrust.retract() : thrust.extend());
+        var margin = ActuatorPerformance.margin(weakest, required);
+        facts.add(new Calculated("thrust_margin_ratio", margin.ratio(), "ratio"));
+        facts.add(new Finding("thrust_margin", String.format(Locale.ROOT,
+                "At %s supply the piston makes %s in its weaker direction against %s required: %.2f times what is needed.",
+                supply != null ? Facts.show(supply) : Facts.pressure(supplyPa) + " (nominal)", Facts.force(weakest),
+                Facts.force(required), margin.ratio()), margin.ratio(), "ratio", "at least 1.0"));
+    }
+
+    private void cleanliness() {
+        Reading c4 = readings.get("particle_count_4um");
+        Reading c6 = readings.get("particle_count_6um");
+        Reading c14 = readings.get("particle_count_14um");
+        if (c4 == null || c6 == null || c14 == null) {
+            return;
+        }
+        Iso4406.Code code = Iso4406.fromCounts(c4.value(), c6.value(), c14.value());
+        Iso4406.Code target;
+        if (asset.cleanlinessTarget() != null) {
+            target = Iso4406.parse(asset.cleanlinessTarget());
+        } else {
+            target = Iso4406.SERVO_TARGET;
+            facts.add(new Assumption("No cleanliness target given: assumed 16/14/11, a common target for servo-class positioners."));
+        }
+        var comparison = Iso4406.compare(code, target);
+        int worst = comparison.exceedances().stream().mapToInt(Iso4406.Exceedance::steps).max().orElse(0);
+        facts.add(new Calculated("iso4406_steps_over_target", worst, "steps"));
+        facts.add(new Finding("iso4406_code", String.format(Locale.ROOT, "Particle counts give ISO 4406 code %s against a target of %s%s.",
+                code, target, worst > 0 ? ": " + worst + " scale step(s) over, each step doubling the count" : ": within target"),
+                worst, "steps over target", target.toString()));
+    }
+
+    private void leakage() {
+        Reading creep = readings.get("creep_rate");
+        Double bore = asset.value("piston_bore");
+        if (creep == null || bore == null) {
+            return;
+        }
+        double flow = Leakage.internalLeakageFlow(ActuatorPerformance.areas(bore, 0).bore(), creep.value());
+        facts.add(new Finding("creep_leakage", String.format(Locale.ROOT,
+                "A creep of %s on this piston means about %.0f mL/min passing the spool lands or piston seals.",
+                Facts.show(creep), flow * 6e7), flow * 6e7, "mL/min", null));
+    }
+
+    private void pumpEfficiency() {
+        Reading flow = readings.get("pump_flow");
+        Double rated = asset.value("pump_rated_flow");
+        if (flow == null || rated == null) {
+            return;
+        }
+        double efficiency = Leakage.volumetricEfficiency(flow.value(), rated);
+        facts.add(new Calculated("pump_volumetric_efficiency", efficiency, "fraction"));
+        facts.add(new Finding("pump_volumetric_efficiency", String.format(Locale.ROOT,
+                "The pump delivers %s, %.0f %% of its rated %.1f L/min.", Facts.show(flow), efficiency * 100, rated * 60_000),
+                efficiency * 100, "percent", "at least 85 %"));
+    }
+
+    /** Merritt's centred-piston natural frequency, with and without the assumed free air. */
+    private void naturalFrequency() {
+        Reading period = readings.get("oscillation_period");
+        Double bore = asset.value("piston_bore");
+        Double stroke = asset.value("stroke_length");
+        Double mass = asset.value("moving_mass");
+        if (period == null || bore == null || stroke == null || mass == null) {
+            return;
+        }
+        double area = ActuatorPerformance.areas(bore, 0).bore();
+        double volume = area * stroke;
+        double pAbs = nominalSupply() / 2 + ATMOSPHERE; // a centred, balanced piston sits near half supply
+        double dry = HydraulicNaturalFrequency.centred(OIL_BULK_MODULUS, area, volume, mass).hertz();
+        double aerated = HydraulicNaturalFrequency.centred(
+                BulkModulus.effective(OIL_BULK_MODULUS, AIR_FRACTION, pAbs, BulkModulus.ADIABATIC_AIR), area, volume, mass).hertz();
+        double measured = 1 / period.value();
+        facts.add(new Calculated("natural_frequency_aerated", aerated, "Hz"));
+        facts.add(new Calculated("oscillation_frequency", measured, "Hz"));
+        facts.add(new Finding("hydraulic_natural_frequency", String.format(Locale.ROOT,
+                "The oil column's natural frequency is about %.0f Hz, %.0f Hz with 1 %% free air; the valve cycles at %.2f Hz.",
+                dry, aerated, measured), aerated, "Hz", null));
+    }
+
+    private Double flowForReturn() {
+        Reading measured = readings.get("pump_flow");
+        return measured != null ? Double.valueOf(measured.value()) : asset.value("pump_rated_flow");
+    }
+
+    private double nominalSupply() {
+        Double nominal = asset.value("supply_pressure_nominal");
+        return nominal != null ? nominal : UnitConverter.convert(NormalBands.DEFAULT_SUPPLY_PSI, "psi", "Pa");
+    }
+
+    private IsoVgGrade grade() {
+        try {
+            return asset.oilGrade() == null ? NormalBands.DEFAULT_GRADE : IsoVgGrade.parse(asset.oilGrade());
+        } catch (IllegalArgumentException e) {
+            return NormalBands.DEFAULT_GRADE;
+        }
+    }
+
+    /** Formatting in the units technicians read: psi with bar, N with lbf. */
+    static final class Facts {
+        static String show(Reading r) {
+            return dev.positioner.diagnosis.facts.Say.show(r.givenValue(), r.givenUnit());
+        }
+
+        static String pressure(double pa) {
+            return String.format(Locale.ROOT, "%.1f psi (%.2f bar)", UnitConverter.convert(pa, "Pa", "psi"),
+                    UnitConverter.convert(pa, "Pa", "bar"));
+        }
+
+        static String force(double n) {
+            return String.format(Locale.ROOT, "%.1f kN (%.0f lbf)", n / 1000, UnitConverter.convert(n, "N", "lbf"));
+        }
+    }
+}

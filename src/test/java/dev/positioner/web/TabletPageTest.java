@@ -1,0 +1,237 @@
+package dev.positioner.web;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import io.quarkus.test.common.http.TestHTTPResource;
+import io.quarkus.test.junit.QuarkusTest;
+import java.io.IOException;
+import java.net.URL;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.time.Duration;
+import java.util.List;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.openqa.selenium.By;
+import org.openqa.selenium.OutputType;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.chromium.ChromiumNetworkConditions;
+
+/**
+ * The technician's page in a real headless browser against the running service (demo plant on):
+ * no part of the page or the API is stubbed. One browser serves the whole class, because starting
+ * chromium costs more than the tests themselves.
+ */
+@QuarkusTest
+class TabletPageTest {
+
+    private static Tablet tablet;
+
+    @TestHTTPResource("/")
+    URL page;
+
+    @BeforeAll
+    static void startBrowser() {
+        tablet = new Tablet();
+    }
+
+    @AfterAll
+    static void stopBrowser() {
+        if (tablet != null) {
+            tablet.close();
+        }
+    }
+
+    @BeforeEach
+    void freshTablet() {
+        tablet.openFresh(page.toString());
+    }
+
+    /**
+     * A clogged supply filter on PV-2041: low supply read in bar, then the checks as the page asks
+     * them, answering as that fault would (filter differential high, everything else normal).
+     */
+    @Test
+    void guidedJobRanksCausesAsksOneCheckAtATimeAndStops() throws IOException {
+        tablet.startJob("PV-2041", List.of("slow_stroke", "low_supply_pressure"), List.of("hunting"));
+        tablet.reading("supply_pressure", "14", "bar");
+        tablet.diagnose();
+
+        assertTrue(tablet.visible("result"), "the diagnosis is shown");
+        assertEquals("Valve PV-2041", tablet.byId("job-tag").getAttribute("textContent"));
+        List<WebElement> causes = tablet.all("#cause-list > li");
+        assertTrue(causes.size() >= 2 && causes.size() <= 5, "top causes only: " + causes.size());
+        int previous = 101;
+        for (WebElement cause : causes) {
+            String pct = cause.findElement(By.className("cause-pct")).getText();
+            assertTrue(pct.matches("\\d{1,3} %|<1 %"), "a percentage: " + pct);
+            int value = pct.startsWith("<") ? 0 : Integer.parseInt(pct.replace(" %", ""));
+            assertTrue(value <= previous, "most probable first");
+            previous = value;
+            assertTrue(cause.findElement(By.cssSelector(".cause-code b")).getText().matches("[A-Z]{3}"),
+                    "ISO 14224 failure-mode code shown");
+        }
+        String firstBar = causes.get(0).findElement(By.cssSelector(".prob span")).getAttribute("style");
+        assertTrue(firstBar.matches("width: ?[1-9][0-9.]*%;?"), "the leader's bar has its width: " + firstBar);
+        // The reading was entered in bar, so the service's finding speaks of 14.0 bar, not psi.
+        assertTrue(tablet.byId("finding-list").getAttribute("textContent").contains("14.0 bar"));
+        assertCheckCardIsComplete();
+        assertFalse(tablet.all("#caution-list li").isEmpty(), "cautions shown");
+        tablet.js("window.scrollTo(0, 0);");
+        Path shot = tablet.driver.getScreenshotAs(OutputType.FILE).toPath();
+        Files.copy(shot, Path.of("target", "web-screenshot.png"), StandardCopyOption.REPLACE_EXISTING);
+
+        int answers = 0;
+        while (answers < 10 && tablet.visible("check-card")) {
+            assertCheckCardIsComplete();
+            String check = tablet.byId("check-card").getAttribute("data-check");
+            if ("true".equals(tablet.byId("check-card").getAttribute("data-bypass"))) {
+                tablet.tap("bypass-ack");
+            }
+            String outcome = "read_filter_dp".equals(check) ? "high"
+                    : tablet.outcomeButtons().get(0).getAttribute("data-outcome");
+            tablet.tap(tablet.byId("outcomes").findElement(By.cssSelector("[data-outcome='" + outcome + "']")));
+            tablet.waitIdle();
+            answers++;
+            assertEquals(answers, tablet.answersShown(), "every answer is listed");
+        }
+        if (tablet.visible("stop-card")) {
+            assertFalse(tablet.text("stop-reason").isBlank(), "the stop reason is shown");
+            assertFalse(tablet.text("stop-action").isBlank(), "the leading cause's action is shown");
+            String leader = tablet.all("#cause-list .cause-title").get(0).getText();
+            assertTrue(tablet.text("stop-title").startsWith(leader), tablet.text("stop-title"));
+        } else {
+            assertEquals(10, answers, "the loop ends on a stop or after ten answers");
+        }
+    }
+
+    @Test
+    void bypassCheckCannotBeAnsweredUntilPermissionIsAcknowledged() {
+        tablet.startJob("PV-2041", List.of("creep_at_zero_signal"), List.of());
+        tablet.diagnose();
+        // Quick readings come first; answering them normal leads to a check that needs a bypass.
+        for (int i = 0; i < 8 && !"true".equals(tablet.byId("check-card").getAttribute("data-bypass")); i++) {
+            tablet.tap(tablet.outcomeButtons().get(0));
+            tablet.waitIdle();
+        }
+        WebElement card = tablet.byId("check-card");
+        assertEquals("true", card.getAttribute("data-bypass"), "a bypass check was reached");
+        String bypassCheck = card.getAttribute("data-check");
+        String bypassTitle = tablet.text("check-title");
+        int answered = tablet.answersShown();
+
+        assertTrue(tablet.visible("bypass-ack-label"));
+        assertTrue(tablet.byId("caution-panel").getAttribute("class").contains("bypass"));
+        // Read as written: the heading is upper-cased by the style sheet only.
+        assertTrue(tablet.byId("caution-heading").getAttribute("textContent").startsWith("Bypass needed"));
+        assertTrue(Boolean.TRUE.equals(tablet.js("return !!(document.getElementById('caution-panel')"
+                + ".compareDocumentPosition(document.getElementById('check-card')) & Node.DOCUMENT_POSITION_FOLLOWING);")),
+                "the cautions come before the check");
+        assertTrue(tablet.outcomeButtons().stream().noneMatch(WebElement::isEnabled), "answers locked");
+        tablet.js("arguments[0].click();", tablet.outcomeButtons().get(0));
+        assertEquals(answered, tablet.answersShown(), "a locked answer is not taken");
+
+        tablet.tap("bypass-ack");
+        assertTrue(tablet.outcomeButtons().stream().allMatch(WebElement::isEnabled), "answers unlocked");
+
+        tablet.tap("cant-do");
+        tablet.waitIdle();
+        assertNotEquals(bypassCheck, tablet.byId("check-card").getAttribute("data-check"), "another check is asked");
+        assertEquals(1, tablet.all("#set-aside-list li").size(), "the check is set aside");
+        assertTrue(tablet.text("set-aside-list").contains(bypassTitle), tablet.text("set-aside-list"));
+    }
+
+    @Test
+    void impossibleReadingShowsTheProblemAndNamesTheReading() {
+        tablet.startJob("TV-1520", List.of("slow_stroke"), List.of());
+        tablet.reading("supply_pressure", "-5", "bar");
+        tablet.diagnose();
+
+        assertTrue(tablet.visible("notice"));
+        String notice = tablet.text("notice");
+        assertTrue(notice.contains("Supply pressure at the positioner"), notice);
+        assertTrue(notice.contains("not a possible supply pressure"), notice);
+        assertTrue(notice.contains("measurements[0].value"), "the field as the service named it: " + notice);
+        assertEquals("true", tablet.byId("reading-supply_pressure").getAttribute("aria-invalid"));
+        assertTrue(tablet.visible("step-readings"), "stays on the readings to correct them");
+
+        tablet.reading("supply_pressure", "12", "bar");
+        tablet.diagnose();
+        assertTrue(tablet.visible("result"));
+        assertFalse(tablet.visible("notice"), "the problem is cleared once the reading is valid");
+    }
+
+    @Test
+    void reloadKeepsTheJobUndoTakesBackAndOfflineAnswersWaitForRetry() {
+        tablet.startJob("LV-0812", List.of("hunting"), List.of());
+        tablet.diagnose();
+        String first = tablet.text("check-title");
+        tablet.tap(tablet.outcomeButtons().get(0));
+        tablet.waitIdle();
+        String second = tablet.text("check-title");
+        assertNotEquals(first, second);
+
+        tablet.driver.navigate().refresh();
+        tablet.waitVisible("result");
+        tablet.waitIdle();
+        assertEquals("Valve LV-0812", tablet.byId("job-tag").getAttribute("textContent"));
+        assertEquals(1, tablet.answersShown(), "the answer survived the reload");
+        assertEquals(second, tablet.text("check-title"));
+
+        tablet.tap("undo");
+        tablet.waitIdle();
+        assertEquals(0, tablet.answersShown());
+        assertEquals(first, tablet.text("check-title"), "undo asks the first check again");
+
+        ChromiumNetworkConditions offline = new ChromiumNetworkConditions();
+        offline.setOffline(true);
+        tablet.driver.setNetworkConditions(offline);
+        try {
+            tablet.tap(tablet.outcomeButtons().get(0));
+            tablet.waitIdle();
+            assertTrue(tablet.text("notice").startsWith("Offline — answers kept, retry"), tablet.text("notice"));
+            assertEquals(1, tablet.answersShown(), "the answer tapped offline is kept");
+            assertTrue(tablet.outcomeButtons().stream().noneMatch(WebElement::isEnabled),
+                    "the old question cannot be answered again while its answer is pending");
+        } finally {
+            tablet.driver.deleteNetworkConditions();
+        }
+        // A slow link, so the request is still running while the screen is looked at.
+        ChromiumNetworkConditions slow = new ChromiumNetworkConditions();
+        slow.setLatency(Duration.ofMillis(1500));
+        tablet.driver.setNetworkConditions(slow);
+        try {
+            tablet.tap("retry");
+            assertTrue(tablet.visible("busy"), "busy is shown while the request runs");
+            assertFalse(tablet.byId("undo").isEnabled(), "buttons wait for the answer");
+            assertFalse(tablet.byId("new-job").isEnabled(), "buttons wait for the answer");
+            tablet.waitIdle();
+        } finally {
+            tablet.driver.deleteNetworkConditions();
+        }
+        assertFalse(tablet.visible("notice"));
+        assertEquals(second, tablet.text("check-title"), "retry sends the kept answer");
+
+        tablet.tap("new-job");
+        tablet.tap("new-job");
+        tablet.waitVisible("step-tag");
+        assertEquals("", tablet.byId("tag").getAttribute("value"));
+        assertEquals("", tablet.byId("job-tag").getAttribute("textContent"));
+    }
+
+    private static void assertCheckCardIsComplete() {
+        assertTrue(tablet.visible("check-card"), "the next check is the main card");
+        assertFalse(tablet.text("check-title").isBlank());
+        String minutes = tablet.byId("check-minutes").getAttribute("textContent");
+        assertTrue(minutes.matches("about [0-9.]+ min"), minutes);
+        assertFalse(tablet.all("#check-steps li").isEmpty(), "instructions shown");
+        assertTrue(tablet.outcomeButtons().size() >= 2, "outcome buttons shown");
+        assertFalse(tablet.text("check-why").isBlank(), "why this check is shown");
+    }
+}
