@@ -71,6 +71,10 @@ public class EmbeddedHousekeeping {
         } catch (RuntimeException e) {
             // Housekeeping must never take the service down; the next run tries again.
             LOG.debugf(e, "embedded database housekeeping skipped");
+        } catch (LinkageError e) {
+            // The MVStore API is H2's own, not JDBC: if an H2 upgrade changes it, say so and stop trying.
+            LOG.warnf("embedded database housekeeping disabled, H2 API changed: %s", e);
+            timer.shutdown();
         }
     }
 }
