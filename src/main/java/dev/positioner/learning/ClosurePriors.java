@@ -59,9 +59,11 @@ public class ClosurePriors implements PriorSource {
         String[] notes = new String[base.length];
         for (int h = 0; h < base.length; h++) {
             if (tag[h] + other[h] > 0) {
-                notes[h] = String.format(Locale.ROOT, "Confirmed %s on %s and %s on %s in past closures; prior %s from %.1f %% to %.1f %%.",
-                        times(tag[h]), asset.tag(), times(other[h]), where, learnt[h] >= base[h] ? "raised" : "lowered",
-                        100 * base[h], 100 * learnt[h]);
+                String onTag = tag[h] == 0 ? null : times(tag[h]) + " on " + asset.tag();
+                String onSite = other[h] == 0 ? null : times(other[h]) + " on " + where;
+                notes[h] = String.format(Locale.ROOT, "Confirmed %s in past closures; prior %s from %.1f %% to %.1f %%.",
+                        onTag == null ? onSite : onSite == null ? onTag : onTag + " and " + onSite,
+                        learnt[h] >= base[h] ? "raised" : "lowered", 100 * base[h], 100 * learnt[h]);
             }
         }
         String basis = String.format(Locale.ROOT, "Prior: the fault catalogue counted as %s closures, plus %d confirmed closure(s)"
@@ -111,7 +113,7 @@ public class ClosurePriors implements PriorSource {
     }
 
     private static String times(int n) {
-        return n == 0 ? "never" : n == 1 ? "once" : n + " times";
+        return n == 1 ? "once" : n + " times";
     }
 
     private static String plain(double x) {

@@ -39,14 +39,20 @@ abstract class SessionFlowContract {
 
     /** A valve like the demo's PV-2041 under a new tag and site. */
     static String newValve() {
+        return newValve(null);
+    }
+
+    /** A valve like the demo's PV-2041 under a new tag, on the given site or a new one. */
+    static String newValve(String onSite) {
         String tag = "T-" + UUID.randomUUID().toString().substring(0, 8).toUpperCase();
+        String site = onSite != null ? onSite : "site-" + tag;
         api().body("""
                 {"tag": "%s", "description": "test valve", "area": "test bay", "site": "%s", "oilGrade": "VG46",
                  "cleanlinessTarget": "16/14/11",
                  "design": [{"quantity": "supply_pressure_nominal", "value": 250, "unit": "psi"},
                             {"quantity": "piston_bore", "value": 8, "unit": "in"},
                             {"quantity": "stroke_length", "value": 4, "unit": "in"},
-                            {"quantity": "pump_rated_flow", "value": 2, "unit": "gpm"}]}""".formatted(tag, "site-" + tag))
+                            {"quantity": "pump_rated_flow", "value": 2, "unit": "gpm"}]}""".formatted(tag, site))
                 .post("/api/v1/assets").then().statusCode(201);
         return tag;
     }
@@ -182,6 +188,12 @@ abstract class SessionFlowContract {
         // A new job on the same valve sees the same history.
         api().body(JOB.formatted(tag, "3")).post("/api/v1/sessions").then().statusCode(201)
                 .body("diagnosis.hypotheses.find { it.fault == 'pump_worn' }.reasons", hasItem(containsString("Confirmed 2 times on " + tag)));
+
+        // Another valve of the same site learns too, at half weight: (50 * 0.045 + 2 * 0.5) / 51.
+        String neighbour = newValve("site-" + tag);
+        JsonPath next = api().body(oneShot.replace(tag, neighbour)).post("/api/v1/diagnoses").then().statusCode(200).extract().jsonPath();
+        assertTrue(next.getList("hypotheses.find { it.fault == 'pump_worn' }.reasons", String.class).contains(
+                "Confirmed 2 times on other valves of site site-" + tag + " in past closures; prior raised from 4.5 % to 6.4 %."));
     }
 
     @Test
