@@ -88,6 +88,7 @@ final class EventChecks {
             case READING -> Map.of("measurements[0].", "");
             case CHECK -> Map.of("checks[0].", "");
             case UNAVAILABLE -> Map.of("unavailableChecks[0]", "check");
+            case TRACE -> Map.of("traces[0]", "traceId");
             default -> Map.of();
         };
         for (FieldError f : e.errors()) {

@@ -23,6 +23,7 @@ final class SessionState {
     private final Map<String, MeasurementInput> readings = new LinkedHashMap<>();
     private final Map<String, String> checks = new LinkedHashMap<>();
     private final Set<String> unavailable = new LinkedHashSet<>();
+    private final Set<String> traces = new LinkedHashSet<>();
 
     /** Which event retracted which: a retraction counts only while it is not itself retracted. */
     static Map<Integer, Integer> retractions(List<SessionEvent> events) {
@@ -59,8 +60,13 @@ final class SessionState {
                 checks.put(d.check(), d.outcome());
             }
             case UNAVAILABLE -> unavailable.add(d.check());
+            case TRACE -> {
+                if (d.traceId() != null) {
+                    traces.add(d.traceId());
+                }
+            }
             default -> {
-                // opening, traces, notes, retractions, closing and reopening carry no evidence
+                // opening, notes, retractions, closing and reopening carry no evidence
             }
         }
     }
@@ -78,6 +84,7 @@ final class SessionState {
         List<CheckInput> done = new ArrayList<>();
         checks.forEach((check, outcome) -> done.add(new CheckInput(check, outcome)));
         List<String> cannot = new ArrayList<>(unavailable);
+        List<String> traceIds = new ArrayList<>(traces);
         if (first != null) {
             EventData d = first.data();
             switch (first.type()) {
@@ -86,11 +93,12 @@ final class SessionState {
                         !b.quantity().equals(d.quantity())));
                 case CHECK -> done.sort((a, b) -> Boolean.compare(!a.check().equals(d.check()), !b.check().equals(d.check())));
                 case UNAVAILABLE -> moveFirst(cannot, d.check());
+                case TRACE -> moveFirst(traceIds, d.traceId());
                 default -> {
                 }
             }
         }
-        return new DiagnosisRequest(present, absent, measurements, done, cannot, new AssetInput(tag, null, null, null));
+        return new DiagnosisRequest(present, absent, measurements, done, cannot, new AssetInput(tag, null, null, null), traceIds);
     }
 
     private static void moveFirst(List<String> list, String item) {

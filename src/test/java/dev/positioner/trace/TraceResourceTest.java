@@ -80,6 +80,29 @@ class TraceResourceTest {
     }
 
     @Test
+    void aSessionCanTakeTheTraceAsEvidence() {
+        String trace = upload(huntingCsv(), "");
+        String session = given().filter(Contract.VALIDATED).contentType(ContentType.JSON)
+                .body("{\"tag\": \"TV-1520\", \"author\": \"night shift\", \"workOrder\": \"WO-77120\"}")
+                .post("/api/v1/sessions").then().statusCode(201).extract().path("id");
+        given().filter(Contract.VALIDATED).contentType(ContentType.JSON)
+                .body("{\"traceId\": \"" + trace + "\", \"author\": \"night shift\"}")
+                .post("/api/v1/sessions/" + session + "/traces")
+                .then().statusCode(201)
+                .body("diagnosis.decision.rulesFired", hasItem("INT-OSC-01"));
+        // A reference to a trace that was never uploaded is the request's mistake, named as such.
+        given().filter(Contract.RESPONSES).contentType(ContentType.JSON)
+                .body("{\"traceId\": \"no-such-trace\", \"author\": \"night shift\"}")
+                .post("/api/v1/sessions/" + session + "/traces")
+                .then().statusCode(400).body("field", equalTo("traceId"));
+        // ... and was not stored: the session goes on.
+        given().filter(Contract.VALIDATED).contentType(ContentType.JSON)
+                .body("{\"text\": \"hunting also heard at the pump\", \"author\": \"night shift\"}")
+                .post("/api/v1/sessions/" + session + "/notes")
+                .then().statusCode(201);
+    }
+
+    @Test
     void jsonTracesAreAcceptedToo() {
         StringBuilder json = new StringBuilder("{\"samples\": [");
         for (int k = 0; k < 50; k++) {
