@@ -19,8 +19,8 @@ import java.util.Locale;
 final class Calculations {
 
     static final String D341 = "ASTM D341 viscosity-temperature equation; 100 degC value for VI 100 from ASTM D2270; grade limits ISO 3448";
-    private static final double OIL_BULK_MODULUS = 1.5e9;
-    private static final double ATMOSPHERE = 101_325;
+    private static final double OIL_BULK_MODULUS = BulkModulus.MINERAL_OIL;
+    private static final double ATMOSPHERE = BulkModulus.ATMOSPHERE;
 
     private Calculations() {
     }

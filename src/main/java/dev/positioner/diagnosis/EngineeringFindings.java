@@ -27,11 +27,10 @@ import java.util.Map;
  */
 final class EngineeringFindings {
 
-    /** Tangent bulk modulus of mineral hydraulic oil, about 1.5 GPa (from memory; data sheets give 1.4-1.8). */
-    static final double OIL_BULK_MODULUS = 1.5e9;
+    static final double OIL_BULK_MODULUS = BulkModulus.MINERAL_OIL;
     /** Free air assumed when judging whether air could make the actuator resonate: 1 % by volume (from memory, a badly aerated oil). */
     static final double AIR_FRACTION = 0.01;
-    static final double ATMOSPHERE = 101_325;
+    static final double ATMOSPHERE = BulkModulus.ATMOSPHERE;
 
     private final AssetSpec asset;
     private final Map<String, Reading> readings;

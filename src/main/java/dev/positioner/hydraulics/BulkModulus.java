@@ -18,6 +18,10 @@ package dev.positioner.hydraulics;
 public final class BulkModulus {
 
     public static final double ADIABATIC_AIR = 1.4;
+    /** Tangent bulk modulus of mineral hydraulic oil, Pa: about 1.5 GPa (from memory; data sheets give 1.4-1.8). */
+    public static final double MINERAL_OIL = 1.5e9;
+    /** Standard atmosphere, Pa, to turn gauge pressure into the absolute pressure the air term needs. */
+    public static final double ATMOSPHERE = 101_325;
     public static final double ISOTHERMAL_AIR = 1.0;
 
     private BulkModulus() {
