@@ -66,20 +66,34 @@ final class Calculations {
         double flow = in.requireOneOf("pump_flow", "pump_rated_flow");
         Double rod = in.optional("rod_diameter");
         Double measured = in.optional("stroke_time_open");
+        Double port = in.optional("pilot_port_diameter");
+        Double supply = in.optional("supply_pressure") != null ? in.optional("supply_pressure") : in.optional("supply_pressure_nominal");
+        if (port != null && supply == null) {
+            in.error("inputs", "with pilot_port_diameter, needs supply_pressure or supply_pressure_nominal");
+        }
         in.check();
         var areas = areas(in, bore, rod);
-        var extend = ActuatorPerformance.expectedStrokeTime(areas.bore(), stroke, flow, Double.MAX_VALUE);
-        var retract = ActuatorPerformance.expectedStrokeTime(areas.annulus(), stroke, flow, Double.MAX_VALUE);
+        double spoolFlow = port == null ? Double.MAX_VALUE
+                : ActuatorPerformance.fourWaySpoolFlow(Math.PI * port * port / 4, supply, 0, 0, OilViscosity.densityAtCelsius(40));
+        var extend = ActuatorPerformance.expectedStrokeTime(areas.bore(), stroke, flow, spoolFlow);
+        var retract = ActuatorPerformance.expectedStrokeTime(areas.annulus(), stroke, flow, spoolFlow);
+        String limit = extend.limitedBy() == ActuatorPerformance.Limit.PUMP ? "the pump flow" : "the pilot spool's orifice flow";
         List<Result> results = new ArrayList<>(List.of(
-                new Result("stroke_time_full_bore", "swept volume of the full bore over the pump flow", Amounts.seconds(extend.seconds())),
-                new Result("stroke_time_rod_side", "swept volume of the annulus over the pump flow", Amounts.seconds(retract.seconds()))));
+                new Result("stroke_time_full_bore", "swept volume of the full bore over " + limit, Amounts.seconds(extend.seconds())),
+                new Result("stroke_time_rod_side", "swept volume of the annulus over " + limit, Amounts.seconds(retract.seconds()))));
+        if (port != null) {
+            results.add(new Result("pilot_spool_flow", "matched four-way spool fully open, no load, Cd 0.61",
+                    Amounts.in(spoolFlow, "m3_per_s", "L_per_min", "gpm")));
+        }
         if (measured != null) {
             double ratio = ActuatorPerformance.slownessRatio(measured, extend.seconds());
             results.add(new Result("slowness_ratio", String.format(Locale.ROOT, "the measured stroke takes %.1f times the pump-limited time", ratio),
                     Amounts.of(ratio, "ratio")));
         }
-        return new CalculationResult("stroke-time", results, "t = A x stroke / Q (continuity)", List.of("Continuity of an incompressible fluid"),
-                List.of("The pump, not the pilot spool, limits the flow; leakage and compressibility neglected: a lower bound on the stroke time."));
+        return new CalculationResult("stroke-time", results, "t = A x stroke / Q (continuity), Q the smaller of pump and spool flow",
+                List.of("Continuity of an incompressible fluid", "Sharp-edged orifice equation, Cd 0.61; four-way spool flow after H. E. Merritt, Hydraulic Control Systems, 1967"),
+                List.of(port == null ? "No pilot port given: the pump limits the flow." : "Spool flow at the supply given, load pressure zero, oil density at 40 degC.",
+                        "Leakage and compressibility neglected: a lower bound on the stroke time."));
     }
 
     static CalculationResult thrust(Inputs in) {

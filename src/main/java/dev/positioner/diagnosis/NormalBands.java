@@ -135,11 +135,10 @@ final class NormalBands {
         String basis = "1.5 x the design stroke time, common practice";
         if (design == null && asset.value("piston_bore") != null && asset.value("stroke_length") != null
                 && asset.value("pump_rated_flow") != null) {
-            double area = ActuatorPerformance.areas(asset.value("piston_bore"), 0).bore();
-            var expected = ActuatorPerformance.expectedStrokeTime(area, asset.value("stroke_length"),
-                    asset.value("pump_rated_flow"), Double.MAX_VALUE);
+            var expected = expectedStroke(asset);
             design = expected.seconds();
-            basis = String.format(Locale.ROOT, "1.5 x %.0f s, the swept volume over the rated pump flow", design);
+            basis = String.format(Locale.ROOT, "1.5 x %.0f s, the swept volume over the %s", design,
+                    expected.limitedBy() == ActuatorPerformance.Limit.PUMP ? "rated pump flow" : "pilot spool's orifice flow");
             facts.add(new Calculated("stroke_time_expected", design, "s"));
         }
         if (design == null) {
@@ -148,6 +147,23 @@ final class NormalBands {
         }
         facts.add(new Band("stroke_time_open", Double.NaN, design * STROKE_SLOW_FACTOR, "s", basis));
         facts.add(new Band("stroke_time_close", Double.NaN, design * STROKE_SLOW_FACTOR, "s", basis));
+    }
+
+    /**
+     * The smaller of the rated pump flow and, when the pilot port is known, the flow of a matched
+     * four-way spool at nominal supply with no load (sharp-edged orifice, Cd 0.61; Merritt 1967).
+     */
+    static ActuatorPerformance.StrokeTime expectedStroke(AssetSpec asset) {
+        double area = ActuatorPerformance.areas(asset.value("piston_bore"), 0).bore();
+        double spoolFlow = Double.MAX_VALUE;
+        Double port = asset.value("pilot_port_diameter");
+        if (port != null) {
+            Double nominal = asset.value("supply_pressure_nominal");
+            double supply = nominal != null ? nominal : psi(DEFAULT_SUPPLY_PSI);
+            spoolFlow = ActuatorPerformance.fourWaySpoolFlow(Math.PI * port * port / 4, supply, 0, 0,
+                    OilViscosity.densityAtCelsius(40));
+        }
+        return ActuatorPerformance.expectedStrokeTime(area, asset.value("stroke_length"), asset.value("pump_rated_flow"), spoolFlow);
     }
 
     private static double designOr(AssetSpec asset, String quantity, double fallback, List<Object> facts, String note) {

@@ -73,6 +73,24 @@ class CalculationResourceTest {
     }
 
     @Test
+    void aSmallPilotPortLimitsTheStroke() {
+        // Sharp-edged orifice, Q = Cd A sqrt(2 dp / rho): a 1.5 mm port (A = 1.767e-6 m2) with half
+        // of 250 psi across each land (861.8 kPa) and rho(40 degC) = 856.1 kg/m3 gives
+        // Q = 0.61 * 1.767e-6 * sqrt(2 * 861845 / 856.1) = 4.837e-5 m3/s = 2.90 L/min, less than the
+        // 2 gpm (7.57 L/min) pump; the 3.295 L swept volume then takes 3.295e-3 / 4.837e-5 = 68.1 s.
+        post("stroke-time", """
+                {"inputs": [{"quantity": "piston_bore", "value": 8, "unit": "in"},
+                            {"quantity": "stroke_length", "value": 4, "unit": "in"},
+                            {"quantity": "pump_rated_flow", "value": 2, "unit": "gpm"},
+                            {"quantity": "pilot_port_diameter", "value": 1.5, "unit": "mm"},
+                            {"quantity": "supply_pressure_nominal", "value": 250, "unit": "psi"}]}""")
+                .statusCode(200)
+                .body("results[0].values[0].value", closeTo(68.1, 0.2))
+                .body("results[0].text", containsString("pilot spool"))
+                .body("results[2].values.find { it.unit == 'L_per_min' }.value", closeTo(2.90, 0.01));
+    }
+
+    @Test
     void iso4406CodeAtTheTableBoundaries() {
         // ISO 4406:2021 Table 1: >1300 to 2500 is 18, >320 to 640 is 16, >40 to 80 is 13 ("up to and including").
         post("iso4406", """

@@ -89,8 +89,15 @@ abstract class SessionFlowContract {
                         "diagnosis.hypotheses[0].probability", notNullValue());
         add(id, "readings", "{\"quantity\": \"oil_temperature\", \"value\": 104, \"unit\": \"degF\", \"author\": \"tech A\"}")
                 .then().statusCode(201).body("event.seq", equalTo(5));
-        add(id, "traces", "{\"traceId\": \"trace-0042\", \"text\": \"step 40-60 %\", \"author\": \"tech A\"}")
-                .then().statusCode(201).body("event.data.traceId", equalTo("trace-0042"));
+        // A trace logged at the valve: a steady input with the position settled, uploaded first.
+        StringBuilder csv = new StringBuilder("time,input,position\n");
+        for (int k = 0; k < 40; k++) {
+            csv.append(k * 0.5).append(",40,40.1\n");
+        }
+        String trace = given().contentType("text/csv").body(csv.toString()).post("/api/v1/traces")
+                .then().statusCode(201).extract().path("id");
+        add(id, "traces", "{\"traceId\": \"" + trace + "\", \"text\": \"steady at 40 %\", \"author\": \"tech A\"}")
+                .then().statusCode(201).body("event.data.traceId", equalTo(trace));
         add(id, "notes", "{\"text\": \"pump case hot to the touch\", \"author\": \"tech A\"}").then().statusCode(201);
         add(id, "symptoms", "{\"symptom\": \"noisy_pump\", \"author\": \"tech A\"}").then().statusCode(201)
                 .body("event.data.present", equalTo(true));
