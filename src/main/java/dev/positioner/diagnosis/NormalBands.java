@@ -48,6 +48,8 @@ final class NormalBands {
     static final double WATER_HIGH_PPM = 500;
     /** Dead band above 1 % of span is large for a hydraulic positioner (common practice). */
     static final double DEAD_BAND_HIGH = 1.0;
+    /** Hysteresis above 1 % of span is large for a hydraulic positioner (common practice). */
+    static final double HYSTERESIS_HIGH = 1.0;
     /** Stroke length assumed when none is given, only to convert percent creep rates. */
     static final double DEFAULT_STROKE_M = 0.15;
 
@@ -71,6 +73,7 @@ final class NormalBands {
         facts.add(new Band("reservoir_level", LEVEL_LOW, LEVEL_HIGH, "percent", "sight-glass marks, from memory"));
         facts.add(new Band("water_content", Double.NaN, WATER_HIGH_PPM, "ppm", "free water likely above it, from memory"));
         facts.add(new Band("dead_band", Double.NaN, DEAD_BAND_HIGH, "percent", "common practice for hydraulic positioners"));
+        facts.add(new Band("hysteresis", Double.NaN, HYSTERESIS_HIGH, "percent", "common practice for hydraulic positioners"));
         double stroke = designOr(asset, "stroke_length", DEFAULT_STROKE_M, null, null);
         facts.add(new Band("creep_rate", Double.NaN, CREEP_PERCENT_PER_MIN / 100 * stroke / 60, "m_per_s",
                 "0.5 % of travel per minute, from memory"));
