@@ -61,46 +61,22 @@ public class SessionResource {
         return queries.get(id);
     }
 
-    @POST
-    @Path("{id}/symptoms")
-    public Response symptom(@PathParam("id") String id, Add body, @HeaderParam(KEY) String key) {
-        return created(service.add(id, EventType.SYMPTOM, body, key));
-    }
+    /** The path segment of each kind of event a session takes, as the contract names them. */
+    private static final java.util.Map<String, EventType> EVENT_PATHS = java.util.Map.of(
+            "symptoms", EventType.SYMPTOM, "readings", EventType.READING, "checks", EventType.CHECK,
+            "unavailable-checks", EventType.UNAVAILABLE, "traces", EventType.TRACE, "notes", EventType.NOTE,
+            "retractions", EventType.RETRACTION);
 
+    /** {@code POST /sessions/{id}/symptoms|readings|checks|unavailable-checks|traces|notes|retractions}. */
     @POST
-    @Path("{id}/readings")
-    public Response reading(@PathParam("id") String id, Add body, @HeaderParam(KEY) String key) {
-        return created(service.add(id, EventType.READING, body, key));
-    }
-
-    @POST
-    @Path("{id}/checks")
-    public Response check(@PathParam("id") String id, Add body, @HeaderParam(KEY) String key) {
-        return created(service.add(id, EventType.CHECK, body, key));
-    }
-
-    @POST
-    @Path("{id}/unavailable-checks")
-    public Response unavailable(@PathParam("id") String id, Add body, @HeaderParam(KEY) String key) {
-        return created(service.add(id, EventType.UNAVAILABLE, body, key));
-    }
-
-    @POST
-    @Path("{id}/traces")
-    public Response trace(@PathParam("id") String id, Add body, @HeaderParam(KEY) String key) {
-        return created(service.add(id, EventType.TRACE, body, key));
-    }
-
-    @POST
-    @Path("{id}/notes")
-    public Response note(@PathParam("id") String id, Add body, @HeaderParam(KEY) String key) {
-        return created(service.add(id, EventType.NOTE, body, key));
-    }
-
-    @POST
-    @Path("{id}/retractions")
-    public Response retraction(@PathParam("id") String id, Add body, @HeaderParam(KEY) String key) {
-        return created(service.add(id, EventType.RETRACTION, body, key));
+    @Path("{id}/{kind}")
+    public Response add(@PathParam("id") String id, @PathParam("kind") String kind, Add body, @HeaderParam(KEY) String key) {
+        EventType type = EVENT_PATHS.get(kind);
+        if (type == null) {
+            throw new jakarta.ws.rs.NotFoundException("a session takes " + String.join(", ", new java.util.TreeSet<>(EVENT_PATHS.keySet()))
+                    + ", closure and reopening; not '" + kind + "'");
+        }
+        return created(service.add(id, type, body, key));
     }
 
     @POST
