@@ -849,12 +849,14 @@
       const inputId = 'reading-' + q.code;
       const unitId = 'unit-' + q.code;
       const bad = invalid.has(q.code);
+      // change as well as input: a field emptied by the browser itself (clear, autofill) may fire only change.
+      const keep = (ev) => { job.readings[q.code] = { value: ev.target.value, unit: currentUnit(q, unit) }; save(); };
       return el('div', { class: 'reading' + (bad ? ' invalid' : ''), 'data-quantity': q.code }, [
         el('label', { for: inputId, class: 'field-label', text: readingName(q.code) }),
         el('div', { class: 'reading-inputs' }, [
           el('input', { id: inputId, class: 'text-input number', type: 'text', inputmode: 'decimal', autocomplete: 'off',
             value: r.value || '', 'aria-invalid': bad ? 'true' : null,
-            oninput: (ev) => { job.readings[q.code] = { value: ev.target.value, unit: currentUnit(q, unit) }; save(); } }),
+            oninput: keep, onchange: keep }),
           q.units.length > 1
             ? el('select', { id: unitId, class: 'unit', 'aria-label': 'Unit for ' + readingName(q.code),
               onchange: (ev) => {

@@ -129,6 +129,8 @@ class TabletPageTest {
         tablet.waitIdle();
 
         tablet.waitVisible("step-closed");
+        Files.copy(tablet.driver.getScreenshotAs(OutputType.FILE).toPath(), Path.of("target", "web-closure.png"),
+                StandardCopyOption.REPLACE_EXISTING);
         assertEquals(leader, tablet.text("closure-fault"));
         assertTrue(tablet.text("closure-mode").matches("[A-Z]{3}"), tablet.text("closure-mode"));
         assertFalse(tablet.text("closure-mechanism").isBlank());
@@ -217,6 +219,20 @@ class TabletPageTest {
         tablet.diagnose();
         assertTrue(tablet.visible("result"));
         assertFalse(tablet.visible("notice"), "the problem is cleared once the reading is valid");
+
+        // Changing the start of an open job sends only the changes: a new symptom, a reading taken back.
+        tablet.tap("edit-start");
+        tablet.waitVisible("step-symptoms");
+        tablet.tap(tablet.driver.findElement(By.cssSelector("label[for='sym-hunting-present']")));
+        tablet.tap("to-readings");
+        tablet.byId("reading-supply_pressure").clear();
+        tablet.diagnose();
+        assertTrue(tablet.visible("result"));
+        JsonPath session = given().filter(Contract.VALIDATED).get("/api/v1/sessions/" + tablet.sessionId())
+                .then().statusCode(200).extract().jsonPath();
+        assertEquals(List.of("opened", "symptom", "reading", "symptom", "retraction"), session.getList("events.type"));
+        assertEquals("hunting", session.getString("events[3].data.symptom"));
+        assertEquals(3, session.getInt("events[4].data.retracts"), "the reading is taken back");
     }
 
     @Test
