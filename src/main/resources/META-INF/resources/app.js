@@ -3,10 +3,13 @@
 //
 // The whole job lives in one object that is saved to localStorage after every change, so a
 // reload, a flat battery or dropped Wi-Fi loses no answer. The screen is redrawn from it.
+// The job is also a session on the service, so it leaves a record: each answer is queued with an
+// Idempotency-Key made here and saved before it is sent, and the queue is sent in order. A retry
+// after a lost reply re-sends the same key, and the service answers it without storing it twice.
 'use strict';
 
 (function () {
-  const JOB_KEY = 'positioner-job.job.v1';
+  const JOB_KEY = 'positioner-job.job.v2';
   const VOCABULARY_KEY = 'positioner-job.vocabulary.v1';
   const PREFS_KEY = 'positioner-job.prefs.v1';
   // Long enough for a slow plant network, short enough that a dead link is reported while the
@@ -51,16 +54,28 @@
   };
 
   // Controls that exist from the start; each render enables them and then locks what must wait.
-  const STATIC_CONTROLS = ['tag', 'to-symptoms', 'back-to-tag', 'to-readings', 'back-to-symptoms', 'diagnose', 'theme',
-    'new-job', 'cant-do', 'undo', 'edit-start', 'bypass-ack'];
+  const STATIC_CONTROLS = ['tag', 'work-order', 'author', 'to-symptoms', 'back-to-tag', 'to-readings', 'back-to-symptoms',
+    'diagnose', 'theme', 'new-job', 'cant-do', 'undo', 'edit-start', 'close-job', 'stop-close', 'bypass-ack',
+    'close-action', 'close-parts', 'close-minutes', 'close-remarks', 'close-back', 'close-send', 'print'];
+
+  const STAGES = { tag: 'step-tag', symptoms: 'step-symptoms', readings: 'step-readings', result: 'result',
+    close: 'step-close', closed: 'step-closed' };
+
+  // Where each queued action goes, under api/v1/sessions/{id}/.
+  const ENDPOINTS = { symptom: 'symptoms', reading: 'readings', check: 'checks', unavailable: 'unavailable-checks',
+    retract: 'retractions', close: 'closure' };
+  const NOT_FOUND = 'not_found';
 
   const FIELD_PARTS = { value: 'the number', unit: 'the unit', quantity: 'the reading', check: 'the check',
     outcome: 'the answer' };
+  const CLOSE_FIELDS = { confirmedFault: 'Confirmed cause', action: 'What you did', parts: 'Parts used',
+    minutes: 'Minutes spent', remarks: 'Remarks', author: 'Your name' };
 
   let vocabulary = null;
   let job = loadJson(JOB_KEY) || freshJob();
   let prefs = loadJson(PREFS_KEY) || {};
   let busy = false;
+  let flushing = false;
   let notice = null;
   let newJobArmedUntil = 0;
 
@@ -68,9 +83,29 @@
 
   // ---------------------------------------------------------------- state and storage
 
+  // checks and unavailable hold what the technician did, each with `ref`: the Idempotency-Key of
+  // the action that records it (seqs maps a key to the event's seq once the service has it).
+  // `sent` is what has been queued for the service about symptoms and readings, to send changes only.
   function freshJob() {
-    return { version: 1, stage: 'tag', tag: '', symptoms: {}, readings: {}, checks: [], unavailable: [],
-      acknowledged: null, response: null, responseFor: null };
+    return { version: 2, stage: 'tag', tag: '', workOrder: '', symptoms: {}, readings: {}, checks: [], unavailable: [],
+      acknowledged: null, response: null, sessionId: null, sent: null, pending: [], seqs: {}, wantResult: false,
+      closure: null, closeForm: { fault: '', action: '', parts: '', minutes: '', remarks: '' } };
+  }
+
+  // crypto.randomUUID exists only on https or localhost; a plant server on plain http still has
+  // getRandomValues, which is as good for a key that must only never repeat.
+  function newKey() {
+    if (window.crypto && typeof window.crypto.randomUUID === 'function') return window.crypto.randomUUID();
+    const b = new Uint8Array(16);
+    if (window.crypto && window.crypto.getRandomValues) {
+      window.crypto.getRandomValues(b);
+    } else {
+      for (let i = 0; i < 16; i++) b[i] = Math.floor(Math.random() * 256);
+    }
+    b[6] = (b[6] & 0x0f) | 0x40;
+    b[8] = (b[8] & 0x3f) | 0x80;
+    const h = Array.from(b, (x) => x.toString(16).padStart(2, '0')).join('');
+    return h.slice(0, 8) + '-' + h.slice(8, 12) + '-' + h.slice(12, 16) + '-' + h.slice(16, 20) + '-' + h.slice(20);
   }
 
   function loadJson(key) {
@@ -101,30 +136,28 @@
     return Number.isFinite(n) ? n : NaN;
   }
 
-  function diagnosisRequest() {
+  function readingNow(q) {
+    const r = job.readings[q.code];
+    const value = r ? parseNumber(r.value) : null;
+    return value === null ? null : { quantity: q.code, value: value, unit: (r && r.unit) || q.units[0] };
+  }
+
+  function openRequest() {
     const present = [];
     const absent = [];
     for (const s of vocabulary.symptoms) {
       if (job.symptoms[s.code] === 'present') present.push(s.code);
       if (job.symptoms[s.code] === 'absent') absent.push(s.code);
     }
-    const measurements = [];
-    for (const q of vocabulary.measurements) {
-      const r = job.readings[q.code];
-      if (!r) continue;
-      const value = parseNumber(r.value);
-      if (value === null) continue;
-      measurements.push({ quantity: q.code, value: value, unit: r.unit || q.units[0] });
-    }
-    const body = { symptoms: present, absentSymptoms: absent, measurements: measurements,
-      checks: job.checks.slice(), unavailableChecks: job.unavailable.slice() };
-    if (job.tag) body.asset = { tag: job.tag };
+    const measurements = vocabulary.measurements.map(readingNow).filter(Boolean);
+    const body = { tag: job.tag, author: prefs.author, symptoms: present, absentSymptoms: absent, measurements: measurements };
+    if (job.workOrder) body.workOrder = job.workOrder;
     return body;
   }
 
-  // The shown result is stale when the answers changed after it came back (e.g. tapped offline).
+  // The shown result is stale while answers wait to be sent (e.g. tapped offline).
   function resultIsStale() {
-    return job.response !== null && job.responseFor !== JSON.stringify(diagnosisRequest());
+    return job.response !== null && job.pending.length > 0;
   }
 
   // ---------------------------------------------------------------- words
@@ -198,7 +231,10 @@
       const code = body && body.unavailableChecks ? body.unavailableChecks[Number(m[1])] : null;
       return 'Check set aside' + (code ? ' (“' + checkTitle(code) + '”)' : '');
     }
-    if (field === 'asset.tag') return 'Valve tag';
+    if (field === 'asset.tag' || field === 'tag') return 'Valve tag';
+    if (CLOSE_FIELDS[field]) return CLOSE_FIELDS[field];
+    m = /^parts\[(\d+)\]$/.exec(field);
+    if (m) return 'Part ' + (Number(m[1]) + 1);
     if (field.startsWith('asset')) return 'Valve data (' + field.slice(6) + ')';
     return humanise(field);
   }
@@ -241,9 +277,8 @@
     } finally {
       setBusy(false);
     }
-    if (vocabulary && job.stage === 'result' && resultIsStale()) {
-      diagnose();
-    }
+    // Answers kept from before a reload or a dropped link go out now, with the keys they were saved with.
+    if (vocabulary && job.pending.length > 0) flush();
   }
 
   function useVocabulary(v) {
@@ -256,7 +291,147 @@
     });
   }
 
-  async function diagnose() {
+  // ---------------------------------------------------------------- the queue of actions
+
+  // Saved with its key before anything is sent: the key is what makes a retry safe.
+  function enqueue(kind, body, target) {
+    const key = newKey();
+    const action = { kind: kind, key: key, body: Object.assign({ author: prefs.author }, body), attempted: false };
+    if (target) action.target = target;
+    job.pending.push(action);
+    save();
+    return key;
+  }
+
+  // Takes back what `ref` recorded: an action never sent is simply dropped; one that may have
+  // reached the service (sent, reply lost) or was stored is retracted once its seq is known.
+  function withdraw(ref) {
+    const i = job.pending.findIndex((p) => p.key === ref && !p.attempted && p.kind !== 'open');
+    if (i >= 0) {
+      job.pending.splice(i, 1);
+      const after = job.pending.findIndex((p) => p.kind === 'retract' && p.target === ref);
+      if (after >= 0) job.pending.splice(after, 1);
+    } else {
+      enqueue('retract', {}, ref);
+    }
+    save();
+  }
+
+  function actionUrl(a) {
+    return a.kind === 'open' ? 'api/v1/sessions'
+      : 'api/v1/sessions/' + encodeURIComponent(job.sessionId) + '/' + ENDPOINTS[a.kind];
+  }
+
+  // Sends the queue in order, one at a time, and stops at the first that does not get through.
+  async function flush() {
+    if (flushing) return;
+    flushing = true;
+    notice = null;
+    setBusy(true);
+    try {
+      while (job.pending.length > 0) {
+        const a = job.pending[0];
+        if (a.kind !== 'open' && !job.sessionId) {
+          job.pending.shift(); // the opening was refused: nothing to add to
+          continue;
+        }
+        if (a.kind === 'retract' && a.body.retracts === undefined) {
+          const seq = job.seqs[a.target];
+          if (seq === undefined) {
+            job.pending.shift(); // what it would take back was never stored
+            continue;
+          }
+          a.body.retracts = seq;
+        }
+        a.attempted = true;
+        save();
+        let r;
+        try {
+          r = await fetchJson(actionUrl(a), {
+            method: 'POST',
+            headers: { 'Content-Type': 'application/json', Accept: 'application/json, application/problem+json',
+              'Idempotency-Key': a.key },
+            body: JSON.stringify(a.body)
+          });
+        } catch (e) {
+          notice = { kind: 'offline' };
+          break;
+        }
+        if (r.ok && r.data && r.data.diagnosis) {
+          job.pending.shift();
+          stored(a, r.data);
+          save();
+          continue;
+        }
+        if (r.status >= 400 && r.status < 500 && r.status !== 408 && r.status !== 429 && r.data) {
+          job.pending.shift();
+          refused(a, r);
+          save();
+          break;
+        }
+        // Not something the technician can correct: keep the queue and let them try again.
+        notice = { kind: 'failed', status: r.status, detail: r.data && r.data.detail };
+        break;
+      }
+      if (job.pending.length === 0 && job.wantResult && job.response && job.stage !== 'closed') {
+        job.wantResult = false;
+        job.stage = 'result';
+        save();
+        announce(job.response);
+        window.scrollTo(0, 0);
+        focusSoon('caution-heading');
+      }
+    } finally {
+      flushing = false;
+      save();
+      setBusy(false);
+    }
+    if (notice) window.scrollTo(0, 0);
+  }
+
+  function stored(a, view) {
+    if (a.kind === 'open') {
+      job.sessionId = view.id;
+      for (const e of view.events || []) {
+        if (e.type === 'symptom') job.seqs['open:symptom:' + e.data.symptom] = e.seq;
+        if (e.type === 'reading') job.seqs['open:reading:' + e.data.quantity] = e.seq;
+      }
+    } else if (view.event) {
+      job.seqs[a.key] = view.event.seq;
+    }
+    job.response = view.diagnosis;
+    if (a.kind === 'close') {
+      job.closure = view.closure;
+      job.stage = 'closed';
+      job.wantResult = false;
+      window.scrollTo(0, 0);
+      focusSoon('closed-heading');
+    }
+  }
+
+  // The service will never take this action: say why, and take back what it stood for on screen.
+  function refused(a, r) {
+    if (a.kind === 'open') {
+      job.sent = null;
+      job.pending = [];
+      job.wantResult = false;
+      if (r.status === 404) {
+        notice = { kind: 'unknown-tag', tag: a.body.tag, detail: r.data.detail };
+        job.stage = 'tag';
+        return;
+      }
+    } else if (a.kind === 'check') {
+      job.checks = job.checks.filter((c) => c.ref !== a.key);
+    } else if (a.kind === 'unavailable') {
+      job.unavailable = job.unavailable.filter((c) => c.ref !== a.key);
+    } else if (job.sent && (a.kind === 'symptom' || a.kind === 'reading')) {
+      job.sent = null; // no longer sure what the service holds: the next Diagnose resends all
+    }
+    notice = { kind: 'problem', problem: r.data, body: a.body };
+  }
+
+  // Diagnose on the readings: opens the session, or after that sends what changed since.
+  function diagnose() {
     const bad = unreadableReading();
     if (bad) {
       notice = { kind: 'problem', problem: null, errors: [{ field: bad, message: 'that is not a number' }],
@@ -264,44 +439,63 @@
       render();
       return;
     }
-    const body = diagnosisRequest();
-    const sent = JSON.stringify(body);
+    if (!job.sessionId && !job.pending.some((p) => p.kind === 'open')) {
+      const body = openRequest();
+      job.pending.push({ kind: 'open', key: newKey(), body: body, attempted: false });
+      job.sent = { symptoms: {}, readings: {} };
+      for (const code of body.symptoms.concat(body.absentSymptoms)) {
+        job.sent.symptoms[code] = { state: job.symptoms[code], refs: ['open:symptom:' + code] };
+      }
+      for (const m of body.measurements) {
+        job.sent.readings[m.quantity] = { value: m.value, unit: m.unit, refs: ['open:reading:' + m.quantity] };
+      }
+    } else {
+      queueChanges();
+    }
+    job.wantResult = true;
     notice = null;
-    if (job.response && job.responseFor === sent) {
-      // The answer on screen is already the one for exactly this request (the service is a pure
-      // function of it), e.g. after undoing an answer that was tapped while offline.
-      job.stage = 'result';
-      save();
-      render();
+    save();
+    if (job.pending.length === 0 && job.response) {
+      job.wantResult = false;
+      go('result');
       return;
     }
-    setBusy(true);
-    try {
-      const r = await fetchJson('api/v1/diagnoses', {
-        method: 'POST',
-        headers: { 'Content-Type': 'application/json', Accept: 'application/json, application/problem+json' },
-        body: sent
-      });
-      if (r.ok && r.data && Array.isArray(r.data.hypotheses)) {
-        job.response = r.data;
-        job.responseFor = sent;
-        if (job.stage !== 'result') job.stage = 'result';
-        save();
-        announce(r.data);
-        window.scrollTo(0, 0);
-        focusSoon('caution-heading');
-      } else if (r.status === 400 && r.data && (r.data.detail || r.data.errors)) {
-        notice = { kind: 'problem', problem: r.data, body: body };
+    flush();
+  }
+
+  // Symptoms and readings changed after the session was opened: send only the differences.
+  // "Don't know" or an emptied reading retracts every event that said otherwise.
+  function queueChanges() {
+    if (!job.sent) job.sent = { symptoms: {}, readings: {} };
+    for (const s of vocabulary.symptoms) {
+      const now = job.symptoms[s.code] || 'unknown';
+      const was = job.sent.symptoms[s.code] || { state: 'unknown', refs: [] };
+      if (now === was.state) continue;
+      if (now === 'unknown') {
+        was.refs.forEach(withdraw);
+        was.refs = [];
       } else {
-        // Not something the technician can correct: keep the answers and let them try again.
-        notice = { kind: 'failed', status: r.status, detail: r.data && r.data.detail };
+        was.refs.push(enqueue('symptom', { symptom: s.code, present: now === 'present' }));
       }
-    } catch (e) {
-      notice = { kind: 'offline', retry: diagnose };
-    } finally {
-      setBusy(false);
+      was.state = now;
+      job.sent.symptoms[s.code] = was;
     }
-    if (notice) window.scrollTo(0, 0);
+    for (const q of vocabulary.measurements) {
+      const now = readingNow(q);
+      const was = job.sent.readings[q.code] || { value: null, unit: null, refs: [] };
+      if (now === null ? was.value === null : now.value === was.value && now.unit === was.unit) continue;
+      if (now === null) {
+        was.refs.forEach(withdraw);
+        was.refs = [];
+        was.value = null;
+        was.unit = null;
+      } else {
+        was.refs.push(enqueue('reading', now));
+        was.value = now.value;
+        was.unit = now.unit;
+      }
+      job.sent.readings[q.code] = was;
+    }
   }
 
   // A reading the service would reject as malformed JSON is caught here, with the reading named.
@@ -353,7 +547,7 @@
   }
 
   function sectionId(stage) {
-    return { tag: 'step-tag', symptoms: 'step-symptoms', readings: 'step-readings', result: 'result' }[stage];
+    return STAGES[stage];
   }
 
   function commitTag() {
@@ -364,31 +558,75 @@
   }
 
   function answer(check, outcome) {
-    job.checks.push({ check: check, outcome: outcome });
+    const ref = enqueue('check', { check: check, outcome: outcome });
+    job.checks.push({ check: check, outcome: outcome, ref: ref });
     job.acknowledged = null;
     save();
-    diagnose();
+    flush();
   }
 
   function setAside(check) {
-    if (!job.unavailable.includes(check)) job.unavailable.push(check);
+    if (job.unavailable.some((c) => c.check === check)) return;
+    const ref = enqueue('unavailable', { check: check });
+    job.unavailable.push({ check: check, ref: ref });
     job.acknowledged = null;
     save();
-    diagnose();
+    flush();
   }
 
   function putBack(check) {
-    job.unavailable = job.unavailable.filter((c) => c !== check);
-    save();
-    diagnose();
+    const item = job.unavailable.find((c) => c.check === check);
+    if (!item) return;
+    job.unavailable = job.unavailable.filter((c) => c !== item);
+    withdraw(item.ref);
+    afterChange();
   }
 
   function undo() {
     if (job.checks.length === 0) return;
-    job.checks.pop();
+    const last = job.checks.pop();
     job.acknowledged = null;
+    withdraw(last.ref);
+    afterChange();
+  }
+
+  // Taking back an answer that was never sent leaves nothing to send: the screen is already right.
+  function afterChange() {
     save();
-    diagnose();
+    if (job.pending.length > 0) flush();
+    else render();
+  }
+
+  function openClose() {
+    const f = job.closeForm;
+    if (!f.fault && job.response && !job.response.nextCheck && job.response.hypotheses.length) {
+      f.fault = job.response.hypotheses[0].fault;
+    }
+    go('close');
+  }
+
+  function sendClose() {
+    const f = job.closeForm;
+    const errors = [];
+    if (!f.fault) errors.push({ field: 'confirmedFault', message: 'pick one, or “Not found”' });
+    if (!f.action.trim()) errors.push({ field: 'action', message: 'say what was done, even “nothing”' });
+    const mins = parseNumber(f.minutes);
+    if (mins === null || Number.isNaN(mins) || mins < 0) errors.push({ field: 'minutes', message: 'a number of minutes, 0 or more' });
+    if (errors.length) {
+      notice = { kind: 'problem', problem: null, errors: errors, local: true };
+      render();
+      window.scrollTo(0, 0);
+      return;
+    }
+    if (job.pending.some((p) => p.kind === 'close')) {
+      flush();
+      return;
+    }
+    const parts = f.parts.split('\n').map((x) => x.trim()).filter(Boolean);
+    const body = { confirmedFault: f.fault, action: f.action.trim(), parts: parts, minutes: mins };
+    if (f.remarks.trim()) body.remarks = f.remarks.trim();
+    enqueue('close', body);
+    flush();
   }
 
   // Two taps, because one gloved mis-tap must not wipe a night's answers.
@@ -411,7 +649,7 @@
     if (notice && notice.retry) {
       notice.retry();
     } else {
-      diagnose();
+      flush();
     }
   }
 
@@ -442,14 +680,17 @@
     document.body.classList.toggle('is-busy', busy);
     $('main').setAttribute('aria-busy', busy ? 'true' : 'false');
     $('loading').hidden = vocabulary !== null;
-    for (const stage of ['tag', 'symptoms', 'readings', 'result']) {
+    for (const stage of Object.keys(STAGES)) {
       $(sectionId(stage)).hidden = vocabulary === null || job.stage !== stage;
     }
+    renderWaiting();
     if (!vocabulary) return;
     if (job.stage === 'tag') renderTag();
     if (job.stage === 'symptoms') renderSymptoms();
     if (job.stage === 'readings') renderReadings();
     if (job.stage === 'result') renderResult();
+    if (job.stage === 'close') renderClose();
+    if (job.stage === 'closed') renderClosed();
     for (const b of document.querySelectorAll('button, input, select')) {
       if (busy) b.disabled = true;
     }
@@ -460,7 +701,8 @@
     $('job-tag').replaceChildren(...(job.tag ? [el('span', { class: 'sr-only', text: 'Valve ' }), job.tag] : []));
     const armed = Date.now() < newJobArmedUntil;
     const nj = $('new-job');
-    nj.textContent = armed ? 'Tap again to clear' : 'New job';
+    const unsent = job.pending.length;
+    nj.textContent = armed ? (unsent ? 'Tap again: ' + unsent + ' unsent lost' : 'Tap again to clear') : 'New job';
     nj.classList.toggle('danger', armed);
     const light = prefs.theme === 'light';
     document.documentElement.dataset.theme = light ? 'light' : 'dark';
@@ -473,8 +715,8 @@
     box.replaceChildren();
     box.className = 'notice';
     if (!notice) {
-      if (vocabulary && job.stage === 'result' && !busy && resultIsStale()) {
-        notice = { kind: 'offline', retry: diagnose };
+      if (vocabulary && !busy && job.pending.length > 0) {
+        notice = { kind: 'offline' };
       } else {
         box.hidden = true;
         return;
@@ -485,8 +727,19 @@
       box.classList.add('offline');
       box.append(
         el('p', { class: 'notice-title', text: 'Offline — answers kept, retry' }),
-        el('p', { text: 'The service did not answer. Everything you entered is saved on this tablet.' }),
+        el('p', { text: 'The service did not answer. Everything you entered is saved on this tablet and is sent,'
+          + ' in order, on Retry or when the network is back.' }),
         el('button', { type: 'button', id: 'retry', class: 'btn primary', onclick: retry, disabled: busy, text: 'Retry' }));
+    } else if (notice.kind === 'unknown-tag') {
+      box.classList.add('problem');
+      const tags = vocabulary ? vocabulary.tags.map((t) => t.tag) : [];
+      box.append(...[
+        el('p', { class: 'notice-title', text: 'Valve “' + notice.tag + '” is not on file' }),
+        el('p', { text: 'A job can be opened only on a registered valve. Check the tag plate, or pick one of these:' }),
+        tags.length ? el('div', { class: 'tag-choices' }, tags.map((t) => el('button', { type: 'button', class: 'btn small',
+          'data-tag': t, onclick: () => { $('tag').value = t; commitTag(); notice = null; render(); }, text: t }))) : null,
+        notice.detail ? el('p', { class: 'problem-detail', text: 'Service said: ' + notice.detail }) : null
+      ].filter(Boolean));
     } else if (notice.kind === 'failed') {
       box.classList.add('offline');
       box.append(...[
@@ -510,12 +763,23 @@
         box.append(el('p', { class: 'problem-detail' },
           ['Service said: ' + notice.problem.detail + (notice.problem.field ? ' (field ' + notice.problem.field + ')' : '')]));
       }
+      if (job.pending.length > 0) {
+        box.append(el('button', { type: 'button', id: 'retry', class: 'btn', onclick: retry, disabled: busy,
+          text: 'Send the rest' }));
+      }
       const aboutReadings = errors.some((e) => e.field && (e.field.startsWith('measurements') || e.field.startsWith('reading:')));
       if (aboutReadings && job.stage !== 'readings') {
         box.append(el('button', { type: 'button', class: 'btn', onclick: () => { const kept = notice; go('readings'); notice = kept; render(); },
           text: 'Go to the readings' }));
       }
     }
+  }
+
+  function renderWaiting() {
+    const n = job.pending.length;
+    const line = $('waiting');
+    line.hidden = n === 0;
+    line.textContent = n === 1 ? '1 answer waiting to be sent' : n + ' answers waiting to be sent';
   }
 
   function invalidReadings() {
@@ -542,8 +806,16 @@
     } else if (known) {
       hint.textContent = known.tag + ': ' + (known.description || 'on file') + '. Its design data will be used.';
     } else {
-      hint.textContent = 'Not on file: the service will assume typical values and say so.';
+      hint.textContent = 'Not on file: a job can be opened only on a registered valve ('
+        + vocabulary.tags.map((t) => t.tag).join(', ') + ').';
     }
+    const wo = $('work-order');
+    if (document.activeElement !== wo) wo.value = job.workOrder || '';
+    const author = $('author');
+    if (document.activeElement !== author) author.value = prefs.author || '';
+    // The session is opened already: its valve, work order and author are on record.
+    const opened = Boolean(job.sessionId) || job.pending.some((p) => p.kind === 'open');
+    for (const id of ['tag', 'work-order', 'author']) $(id).readOnly = opened;
   }
 
   function renderSymptoms() {
@@ -577,12 +849,14 @@
       const inputId = 'reading-' + q.code;
       const unitId = 'unit-' + q.code;
       const bad = invalid.has(q.code);
+      // change as well as input: a field emptied by the browser itself (clear, autofill) may fire only change.
+      const keep = (ev) => { job.readings[q.code] = { value: ev.target.value, unit: currentUnit(q, unit) }; save(); };
       return el('div', { class: 'reading' + (bad ? ' invalid' : ''), 'data-quantity': q.code }, [
         el('label', { for: inputId, class: 'field-label', text: readingName(q.code) }),
         el('div', { class: 'reading-inputs' }, [
           el('input', { id: inputId, class: 'text-input number', type: 'text', inputmode: 'decimal', autocomplete: 'off',
             value: r.value || '', 'aria-invalid': bad ? 'true' : null,
-            oninput: (ev) => { job.readings[q.code] = { value: ev.target.value, unit: currentUnit(q, unit) }; save(); } }),
+            oninput: keep, onchange: keep }),
           q.units.length > 1
             ? el('select', { id: unitId, class: 'unit', 'aria-label': 'Unit for ' + readingName(q.code),
               onchange: (ev) => {
@@ -689,8 +963,13 @@
     $('edit-start').onclick = () => go('symptoms');
     $('set-aside').hidden = job.unavailable.length === 0;
     $('set-aside-list').replaceChildren(...job.unavailable.map((c) => el('li', {}, [
-      el('span', { text: checkTitle(c) }),
-      el('button', { type: 'button', class: 'btn small', onclick: () => putBack(c), text: 'Put back' })])));
+      el('span', { text: checkTitle(c.check) }),
+      el('button', { type: 'button', class: 'btn small', onclick: () => putBack(c.check), disabled: stale,
+        text: 'Put back' })])));
+    $('close-job').onclick = openClose;
+    $('stop-close').onclick = openClose;
+    $('close-job').disabled = stale;
+    $('stop-close').disabled = stale;
 
     // Ranked causes.
     $('cause-list').replaceChildren(...r.hypotheses.slice(0, TOP_CAUSES).map((h) => {
@@ -720,16 +999,73 @@
     $('assumption-list').replaceChildren(...assumptions.map((a) => el('li', { text: plain(a) })));
   }
 
+  function renderClose() {
+    const f = job.closeForm;
+    const r = job.response;
+    const causes = (r ? r.hypotheses.slice(0, TOP_CAUSES) : []).map((h) => ({ code: h.fault,
+      label: h.title + ' — ' + percent(h.probability) }));
+    causes.push({ code: NOT_FOUND, label: 'Not found: no cause confirmed' });
+    if (f.fault && !causes.some((c) => c.code === f.fault)) {
+      const known = vocabulary.faultsByCode[f.fault];
+      causes.unshift({ code: f.fault, label: known ? known.title : humanise(f.fault) });
+    }
+    $('close-causes').replaceChildren(...causes.map((c) => {
+      const id = 'cause-' + c.code;
+      return el('span', { class: 'choice pick' }, [
+        el('input', { type: 'radio', id: id, name: 'confirmed-cause', value: c.code, checked: f.fault === c.code,
+          onchange: () => { f.fault = c.code; save(); } }),
+        el('label', { for: id, class: 'choice-unknown', text: c.label })]);
+    }));
+    for (const [id, field] of [['close-action', 'action'], ['close-parts', 'parts'], ['close-minutes', 'minutes'],
+      ['close-remarks', 'remarks']]) {
+      const input = $(id);
+      if (document.activeElement !== input) input.value = f[field];
+      input.oninput = () => { f[field] = input.value; save(); };
+    }
+    $('close-back').onclick = () => go('result');
+    $('close-send').onclick = sendClose;
+  }
+
+  function renderClosed() {
+    const c = job.closure;
+    if (!c) return;
+    const row = (id, label, value) => [el('dt', { text: label }), el('dd', { id: id, text: value })];
+    const when = c.closedAt ? new Date(c.closedAt).toLocaleString() : '';
+    $('closure-record').dataset.session = c.sessionId;
+    $('closure-record').replaceChildren(...[
+      row('closure-tag', 'Valve', c.tag + (c.site ? ' (' + c.site + ')' : '')),
+      c.workOrder ? row('closure-work-order', 'Work order', c.workOrder) : [],
+      row('closure-fault', 'Confirmed cause', c.faultTitle || humanise(c.confirmedFault)),
+      row('closure-mode', 'ISO 14224 failure mode', c.failureMode),
+      row('closure-mechanism', 'Failure mechanism', c.failureMechanism),
+      row('closure-cause', 'Failure cause', c.failureCause),
+      row('closure-action', 'What was done', c.action),
+      row('closure-parts', 'Parts used', c.parts && c.parts.length ? c.parts.join('; ') : 'none'),
+      row('closure-minutes', 'Minutes spent', String(c.minutes)),
+      c.remarks ? row('closure-remarks', 'Remarks', c.remarks) : [],
+      row('closure-by', 'Closed by', c.closedBy + (when ? ', ' + when : '')),
+      row('closure-session', 'Job record', c.sessionId)
+    ].flat());
+    $('print').onclick = () => window.print();
+  }
+
   // ---------------------------------------------------------------- wiring
 
   function wire() {
     $('tag').addEventListener('input', () => { commitTag(); renderTag(); renderHeader(); });
     $('tag').addEventListener('keydown', (ev) => { if (ev.key === 'Enter') $('to-symptoms').click(); });
+    $('work-order').addEventListener('input', () => { job.workOrder = $('work-order').value.trim(); save(); });
+    $('author').addEventListener('input', () => { prefs.author = $('author').value.trim(); saveJson(PREFS_KEY, prefs); });
     $('to-symptoms').addEventListener('click', () => {
-      commitTag();
+      if (!$('tag').readOnly) commitTag();
       if (!job.tag) {
         $('tag-hint').textContent = 'Enter the valve tag first: the record of this job needs it.';
         $('tag').focus();
+        return;
+      }
+      if (!prefs.author) {
+        $('author-hint').textContent = 'Enter your name first: the record of this job needs it.';
+        $('author').focus();
         return;
       }
       go('symptoms');
@@ -744,6 +1080,8 @@
       saveJson(PREFS_KEY, prefs);
       renderHeader();
     });
+    // Back on the network: send what waited, in order, without waiting for a tap.
+    window.addEventListener('online', () => { if (vocabulary && job.pending.length > 0) flush(); });
     // Another tab on the same tablet changed the job: follow it rather than overwrite it later.
     window.addEventListener('storage', (ev) => {
       if (ev.key === JOB_KEY) {
@@ -754,7 +1092,7 @@
   }
 
   function start() {
-    if (!job || job.version !== 1) job = freshJob();
+    if (!job || job.version !== 2) job = freshJob();
     wire();
     render();
     loadVocabulary();

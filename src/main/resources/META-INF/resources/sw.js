@@ -3,7 +3,7 @@
 // only the page's own files are handled: never the API, because a stale diagnosis must not look
 // like a fresh one.
 'use strict';
-const CACHE = 'positioner-job-page-v1';
+const CACHE = 'positioner-job-page-v2';
 const PAGE = ['./', 'index.html', 'app.js', 'app.css'];
 
 self.addEventListener('install', (event) => {

@@ -101,8 +101,21 @@ final class Tablet implements AutoCloseable {
                 + " && document.getElementById('loading').hidden;")));
     }
 
+    static final String AUTHOR = "R. Okafor";
+
     void startJob(String tag, List<String> seen, List<String> notSeen) {
+        startJob(tag, null, seen, notSeen);
+    }
+
+    /** Fills the start screen (the name only when the tablet does not remember one) and the symptoms. */
+    void startJob(String tag, String workOrder, List<String> seen, List<String> notSeen) {
         byId("tag").sendKeys(tag);
+        if (workOrder != null) {
+            byId("work-order").sendKeys(workOrder);
+        }
+        if (byId("author").getAttribute("value").isEmpty()) {
+            byId("author").sendKeys(AUTHOR);
+        }
         tap("to-symptoms");
         waitVisible("step-symptoms");
         seen.forEach(code -> tap(driver.findElement(By.cssSelector("label[for='sym-" + code + "-present']"))));
@@ -129,6 +142,11 @@ final class Tablet implements AutoCloseable {
 
     int answersShown() {
         return all("#answer-list li").size();
+    }
+
+    /** The id of the session the page has opened for this job, as it keeps it on the tablet. */
+    String sessionId() {
+        return (String) js("return JSON.parse(localStorage.getItem('positioner-job.job.v2')).sessionId;");
     }
 
     String text(String id) {

@@ -1,11 +1,14 @@
 package dev.positioner.web;
 
+import static io.restassured.RestAssured.given;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.positioner.api.Contract;
 import io.quarkus.test.common.http.TestHTTPResource;
+import io.restassured.path.json.JsonPath;
 import io.quarkus.test.junit.QuarkusTest;
 import java.io.IOException;
 import java.net.URL;
@@ -14,6 +17,8 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 import java.time.Duration;
 import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.BeforeEach;
@@ -55,11 +60,12 @@ class TabletPageTest {
 
     /**
      * A clogged supply filter on PV-2041: low supply read in bar, then the checks as the page asks
-     * them, answering as that fault would (filter differential high, everything else normal).
+     * them, answering as that fault would (filter differential high, everything else normal), then
+     * the job closed on the leading cause. The service's record of it is read back over the API.
      */
     @Test
-    void guidedJobRanksCausesAsksOneCheckAtATimeAndStops() throws IOException {
-        tablet.startJob("PV-2041", List.of("slow_stroke", "low_supply_pressure"), List.of("hunting"));
+    void guidedJobIsASessionThatStopsClosesAndLeavesARecord() throws IOException {
+        tablet.startJob("PV-2041", "WO-77120", List.of("slow_stroke", "low_supply_pressure"), List.of("hunting"));
         tablet.reading("supply_pressure", "14", "bar");
         tablet.diagnose();
 
@@ -101,14 +107,53 @@ class TabletPageTest {
             answers++;
             assertEquals(answers, tablet.answersShown(), "every answer is listed");
         }
-        if (tablet.visible("stop-card")) {
-            assertFalse(tablet.text("stop-reason").isBlank(), "the stop reason is shown");
-            assertFalse(tablet.text("stop-action").isBlank(), "the leading cause's action is shown");
-            String leader = tablet.all("#cause-list .cause-title").get(0).getText();
-            assertTrue(tablet.text("stop-title").startsWith(leader), tablet.text("stop-title"));
-        } else {
-            assertEquals(10, answers, "the loop ends on a stop or after ten answers");
-        }
+        assertTrue(tablet.visible("stop-card"), "the planner stops within ten answers: " + answers);
+        assertFalse(tablet.text("stop-reason").isBlank(), "the stop reason is shown");
+        assertFalse(tablet.text("stop-action").isBlank(), "the leading cause's action is shown");
+        String leader = tablet.all("#cause-list .cause-title").get(0).getText();
+        String leaderCode = tablet.all("#cause-list > li").get(0).getAttribute("data-fault");
+        assertTrue(tablet.text("stop-title").startsWith(leader), tablet.text("stop-title"));
+
+        tablet.tap("stop-close");
+        tablet.waitVisible("step-close");
+        assertEquals(tablet.all("#cause-list > li").size() + 1, tablet.all("#close-causes input").size(),
+                "the ranked causes and \"not found\" to choose from");
+        tablet.tap(tablet.driver.findElement(By.cssSelector("label[for='cause-not_found']")));
+        tablet.tap("close-send");
+        assertTrue(tablet.text("notice").contains("What you did"), "a missing action is named: " + tablet.text("notice"));
+        tablet.tap(tablet.driver.findElement(By.cssSelector("label[for='cause-" + leaderCode + "']")));
+        tablet.byId("close-action").sendKeys("Replaced the supply filter element");
+        tablet.byId("close-parts").sendKeys("Filter element 10 µm\nO-ring 38x3");
+        tablet.byId("close-minutes").sendKeys("50");
+        tablet.tap("close-send");
+        tablet.waitIdle();
+
+        tablet.waitVisible("step-closed");
+        Files.copy(tablet.driver.getScreenshotAs(OutputType.FILE).toPath(), Path.of("target", "web-closure.png"),
+                StandardCopyOption.REPLACE_EXISTING);
+        assertEquals(leader, tablet.text("closure-fault"));
+        assertTrue(tablet.text("closure-mode").matches("[A-Z]{3}"), tablet.text("closure-mode"));
+        assertFalse(tablet.text("closure-mechanism").isBlank());
+        assertFalse(tablet.text("closure-cause").isBlank());
+        assertEquals("Filter element 10 µm; O-ring 38x3", tablet.text("closure-parts"));
+        assertEquals("WO-77120", tablet.text("closure-work-order"));
+
+        String id = tablet.sessionId();
+        assertEquals(id, tablet.text("closure-session"));
+        JsonPath session = given().filter(Contract.VALIDATED).get("/api/v1/sessions/" + id)
+                .then().statusCode(200).extract().jsonPath();
+        assertEquals("closed", session.getString("status"));
+        assertEquals("PV-2041", session.getString("tag"));
+        assertEquals("WO-77120", session.getString("workOrder"));
+        assertEquals(Tablet.AUTHOR, session.getString("openedBy"));
+        assertEquals(leaderCode, session.getString("closure.confirmedFault"));
+        assertEquals(tablet.text("closure-mode"), session.getString("closure.failureMode"));
+        Map<String, Long> types = session.<String>getList("events.type").stream()
+                .collect(Collectors.groupingBy(t -> t, Collectors.counting()));
+        assertEquals(Map.of("opened", 1L, "symptom", 3L, "reading", 1L, "check", (long) answers, "closed", 1L), types,
+                "every answer stored once, nothing else");
+        assertEquals(answers, session.getList("events.findAll { it.type == 'check' }.data.check").stream().distinct().count(),
+                "no check stored twice");
     }
 
     @Test
@@ -148,8 +193,17 @@ class TabletPageTest {
     }
 
     @Test
-    void impossibleReadingShowsTheProblemAndNamesTheReading() {
-        tablet.startJob("TV-1520", List.of("slow_stroke"), List.of());
+    void unknownTagAndImpossibleReadingAreExplainedInPlainWords() {
+        tablet.startJob("TV-1250", List.of("slow_stroke"), List.of());
+        tablet.diagnose();
+        assertTrue(tablet.visible("step-tag"), "back to the tag to correct it");
+        String unknown = tablet.text("notice");
+        assertTrue(unknown.contains("Valve “TV-1250” is not on file"), unknown);
+        assertTrue(unknown.contains("no valve tag 'TV-1250'"), "the service's words too: " + unknown);
+        tablet.tap(tablet.driver.findElement(By.cssSelector("#notice [data-tag='TV-1520']")));
+        assertEquals("TV-1520", tablet.byId("tag").getAttribute("value"), "a registered tag is offered");
+        tablet.tap("to-symptoms");
+        tablet.tap("to-readings");
         tablet.reading("supply_pressure", "-5", "bar");
         tablet.diagnose();
 
@@ -165,6 +219,20 @@ class TabletPageTest {
         tablet.diagnose();
         assertTrue(tablet.visible("result"));
         assertFalse(tablet.visible("notice"), "the problem is cleared once the reading is valid");
+
+        // Changing the start of an open job sends only the changes: a new symptom, a reading taken back.
+        tablet.tap("edit-start");
+        tablet.waitVisible("step-symptoms");
+        tablet.tap(tablet.driver.findElement(By.cssSelector("label[for='sym-hunting-present']")));
+        tablet.tap("to-readings");
+        tablet.byId("reading-supply_pressure").clear();
+        tablet.diagnose();
+        assertTrue(tablet.visible("result"));
+        JsonPath session = given().filter(Contract.VALIDATED).get("/api/v1/sessions/" + tablet.sessionId())
+                .then().statusCode(200).extract().jsonPath();
+        assertEquals(List.of("opened", "symptom", "reading", "symptom", "retraction"), session.getList("events.type"));
+        assertEquals("hunting", session.getString("events[3].data.symptom"));
+        assertEquals(3, session.getInt("events[4].data.retracts"), "the reading is taken back");
     }
 
     @Test
@@ -199,16 +267,13 @@ class TabletPageTest {
             assertEquals(1, tablet.answersShown(), "the answer tapped offline is kept");
             assertTrue(tablet.outcomeButtons().stream().noneMatch(WebElement::isEnabled),
                     "the old question cannot be answered again while its answer is pending");
-        } finally {
-            tablet.driver.deleteNetworkConditions();
-        }
-        // A slow link, so the request is still running while the screen is looked at.
-        ChromiumNetworkConditions slow = new ChromiumNetworkConditions();
-        slow.setLatency(Duration.ofMillis(1500));
-        tablet.driver.setNetworkConditions(slow);
-        try {
-            tablet.tap("retry");
-            assertTrue(tablet.visible("busy"), "busy is shown while the request runs");
+            assertEquals("1 answer waiting to be sent", tablet.text("waiting"));
+            // Back on a slow link: the page sends the kept answer by itself, and the request is
+            // still running while the screen is looked at.
+            ChromiumNetworkConditions slow = new ChromiumNetworkConditions();
+            slow.setLatency(Duration.ofMillis(1500));
+            tablet.driver.setNetworkConditions(slow);
+            tablet.waitVisible("busy");
             assertFalse(tablet.byId("undo").isEnabled(), "buttons wait for the answer");
             assertFalse(tablet.byId("new-job").isEnabled(), "buttons wait for the answer");
             tablet.waitIdle();
@@ -216,13 +281,88 @@ class TabletPageTest {
             tablet.driver.deleteNetworkConditions();
         }
         assertFalse(tablet.visible("notice"));
-        assertEquals(second, tablet.text("check-title"), "retry sends the kept answer");
+        assertFalse(tablet.visible("waiting"));
+        assertEquals(second, tablet.text("check-title"), "the kept answer was sent once back online");
+        JsonPath session = given().filter(Contract.VALIDATED).get("/api/v1/sessions/" + tablet.sessionId())
+                .then().statusCode(200).extract().jsonPath();
+        assertEquals(List.of("check", "retraction", "check"),
+                session.getList("events.findAll { it.type in ['check', 'retraction'] }.type"),
+                "answer, its undo and the answer tapped offline, each stored once");
 
         tablet.tap("new-job");
         tablet.tap("new-job");
         tablet.waitVisible("step-tag");
         assertEquals("", tablet.byId("tag").getAttribute("value"));
         assertEquals("", tablet.byId("job-tag").getAttribute("textContent"));
+    }
+
+    /**
+     * The answer reaches the service but its reply is lost on the way back (the Wi-Fi drops), then
+     * the undo is tapped with no network at all. Retry sends both in order; the answer goes with
+     * the key it was first sent with, so the service replays it instead of storing it again.
+     */
+    @Test
+    void answerWhoseReplyIsLostIsStoredOnceAndQueuedUndoFollowsInOrder() {
+        tablet.startJob("LV-0812", List.of("hunting"), List.of());
+        tablet.diagnose();
+        String first = tablet.text("check-title");
+        String check = tablet.byId("check-card").getAttribute("data-check");
+        tablet.js("""
+                const real = window.fetch;
+                window.sentPosts = [];
+                window.lostReplies = 2;
+                window.fetch = async function (url, options) {
+                  const res = await real.apply(this, arguments);
+                  if (options && options.method === 'POST') {
+                    window.sentPosts.push({ url: String(url), key: options.headers['Idempotency-Key'],
+                      replayed: res.headers.get('Idempotent-Replayed') });
+                    if (window.lostReplies > 0) {
+                      window.lostReplies--;
+                      throw new TypeError('Failed to fetch');
+                    }
+                  }
+                  return res;
+                };""");
+        tablet.tap(tablet.outcomeButtons().get(0));
+        tablet.waitIdle();
+        assertTrue(tablet.text("notice").startsWith("Offline — answers kept, retry"), tablet.text("notice"));
+        assertEquals("1 answer waiting to be sent", tablet.text("waiting"));
+        assertEquals(1, tablet.answersShown());
+        tablet.tap("retry");
+        tablet.waitIdle();
+        assertEquals("1 answer waiting to be sent", tablet.text("waiting"), "its reply was lost once more");
+
+        ChromiumNetworkConditions offline = new ChromiumNetworkConditions();
+        offline.setOffline(true);
+        tablet.driver.setNetworkConditions(offline);
+        try {
+            tablet.tap("undo");
+            tablet.waitIdle();
+            assertEquals("2 answers waiting to be sent", tablet.text("waiting"), "the undo waits behind the answer");
+            assertEquals(0, tablet.answersShown());
+        } finally {
+            tablet.driver.deleteNetworkConditions();
+        }
+        // Back online the page sends what waited by itself.
+        tablet.waitIdle();
+        assertFalse(tablet.visible("waiting"), "nothing left to send");
+        assertFalse(tablet.visible("notice"));
+        assertEquals(first, tablet.text("check-title"), "after the undo the first check is asked again");
+
+        List<Map<String, String>> posts = (List<Map<String, String>>) tablet.js("return window.sentPosts;");
+        List<Map<String, String>> checkPosts = posts.stream().filter(p -> p.get("url").endsWith("/checks")).toList();
+        assertEquals(3, checkPosts.size(), "the answer reached the service three times: " + posts);
+        assertTrue(checkPosts.stream().allMatch(p -> p.get("key").equals(checkPosts.get(0).get("key"))), "with one key");
+        assertEquals(List.of("false", "true", "true"), checkPosts.stream().map(p -> p.get("replayed")).toList(),
+                "after the first, the service answered from its record");
+
+        JsonPath session = given().filter(Contract.VALIDATED).get("/api/v1/sessions/" + tablet.sessionId())
+                .then().statusCode(200).extract().jsonPath();
+        List<Map<String, Object>> checks = session.getList("events.findAll { it.type == 'check' }");
+        assertEquals(1, checks.size(), "the answer is stored once: " + checks);
+        assertEquals(check, ((Map<?, ?>) checks.get(0).get("data")).get("check"));
+        List<Integer> retracted = session.getList("events.findAll { it.type == 'retraction' }.data.retracts");
+        assertEquals(List.of(checks.get(0).get("seq")), retracted, "the undo took back that answer, once");
     }
 
     private static void assertCheckCardIsComplete() {
