@@ -3,7 +3,8 @@
  * numbers that can be compared with what the valve should show: oil viscosity and density at
  * temperature, drain-line pressure drop, piston thrust and expected stroke time, ISO 4406
  * cleanliness codes, effective bulk modulus and hydraulic natural frequency, internal leakage
- * from creep, signal deviation and the supply pressure band.
+ * from creep and the supply pressure band. (Signal ranges and percent of span are in
+ * {@code dev.positioner.measure.UnitConverter}; the deviation limit is a rule, INT-SIG-01.)
  *
  * <p>Every class here is pure: static methods, no state, no I/O, no framework. Inputs and
  * outputs are SI doubles (Pa, m, m&sup2;, m&sup3;/s, s, K, N, kg, kg/m&sup3;), with two

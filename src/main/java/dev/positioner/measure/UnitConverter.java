@@ -69,7 +69,8 @@ public final class UnitConverter {
                 || unit.equals("ppm");
     }
 
-    private static double signalPercent(double value, String unit) {
+    /** An instrument signal in percent, mA (4-20), psi (3-15) or bar (0.2-1.0) as percent of span. */
+    public static double signalPercent(double value, String unit) {
         if (unit.equals("percent")) {
             return value;
         }

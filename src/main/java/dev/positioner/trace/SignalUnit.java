@@ -1,26 +1,26 @@
 package dev.positioner.trace;
 
+import dev.positioner.measure.UnitConverter;
+
 /**
  * Units a trace column may be logged in, each converted to percent of span.
  * Sources: IEC 60381-1 (analogue direct-current signals, 4 to 20 mA) and IEC 60382 (analogue
  * pneumatic signal, 20 to 100 kPa, the metric form of the customary 3 to 15 psi range).
  */
 public enum SignalUnit {
-    PERCENT(0, 100),
-    MILLIAMP(4, 20),
-    PSI(3, 15);
+    PERCENT("percent"),
+    MILLIAMP("mA"),
+    PSI("psi");
 
-    private final double low;
-    private final double high;
+    private final String unitCode;
 
-    SignalUnit(double low, double high) {
-        this.low = low;
-        this.high = high;
+    SignalUnit(String unitCode) {
+        this.unitCode = unitCode;
     }
 
-    /** Linear map of the live-zero range onto 0..100 % (4 mA and 3 psi are 0 %). */
+    /** Linear map of the live-zero range onto 0..100 % (4 mA and 3 psi are 0 %); the ranges live in UnitConverter. */
     public double toPercent(double value) {
-        return (value - low) * 100.0 / (high - low);
+        return UnitConverter.signalPercent(value, unitCode);
     }
 
     /** Parses "%", "percent", "mA", "psi" (case-insensitive), as a REST parameter would give. */
