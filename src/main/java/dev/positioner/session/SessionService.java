@@ -125,12 +125,7 @@ public class SessionService {
         String key = Idempotency.key(header, body.clientEventId(), "clientEventId");
         EventData data = EventChecks.data(type, body);
         String hash = Idempotency.hash(json, List.of(type.code(), data, body.author()));
-        return storage.inTransaction(c -> {
-            SessionRow s = locked(c, sessionId);
-            Optional<Outcome> replay = replay(c, s, key, hash);
-            if (replay.isPresent()) {
-                return replay.get();
-            }
+        return onLockedSession(sessionId, key, hash, (c, s) -> {
             if (s.closed()) {
                 throw ProblemException.conflict("session " + s.id() + " is closed; reopen it before adding to it");
             }
@@ -158,12 +153,7 @@ public class SessionService {
         EventData data = EventData.closed(body.confirmedFault(), body.action().strip(),
                 body.parts() == null ? List.of() : body.parts().stream().map(String::strip).toList(), body.minutes(), body.remarks());
         String hash = Idempotency.hash(json, List.of("closed", data, body.author()));
-        return storage.inTransaction(c -> {
-            SessionRow s = locked(c, sessionId);
-            Optional<Outcome> replay = replay(c, s, key, hash);
-            if (replay.isPresent()) {
-                return replay.get();
-            }
+        return onLockedSession(sessionId, key, hash, (c, s) -> {
             if (s.closed()) {
                 throw ProblemException.conflict("session " + s.id() + " is already closed");
             }
@@ -189,12 +179,7 @@ public class SessionService {
         }
         EventData data = EventData.reopened(body.reason().strip());
         String hash = Idempotency.hash(json, List.of("reopened", data, body.author()));
-        return storage.inTransaction(c -> {
-            SessionRow s = locked(c, sessionId);
-            Optional<Outcome> replay = replay(c, s, key, hash);
-            if (replay.isPresent()) {
-                return replay.get();
-            }
+        return onLockedSession(sessionId, key, hash, (c, s) -> {
             if (!s.closed()) {
                 throw ProblemException.conflict("session " + s.id() + " is open; only a closed session can be reopened");
             }
@@ -219,6 +204,23 @@ public class SessionService {
         String status = upToSeq == s.lastSeq() ? s.status() : (closed ? SessionRow.CLOSED : SessionRow.OPEN);
         return new SessionView(s.id(), s.tag(), s.workOrder(), status, s.openedBy(), s.openedAt(), upToSeq,
                 allEvents ? null : last, allEvents ? shown : null, diagnose(s.tag(), events, null), closure);
+    }
+
+    /**
+     * Locks the session row (which orders appends from several instances) and, if this request's
+     * Idempotency-Key was seen before, answers as the first time; otherwise runs {@code step}.
+     */
+    private Outcome onLockedSession(String sessionId, String key, String hash, Step step) {
+        return storage.inTransaction(c -> {
+            SessionRow s = locked(c, sessionId);
+            Optional<Outcome> replay = replay(c, s, key, hash);
+            return replay.isPresent() ? replay.get() : step.run(c, s);
+        });
+    }
+
+    @FunctionalInterface
+    private interface Step {
+        Outcome run(Connection c, SessionRow s) throws SQLException;
     }
 
     private Optional<Outcome> replay(Connection c, SessionRow s, String key, String hash) throws SQLException {
