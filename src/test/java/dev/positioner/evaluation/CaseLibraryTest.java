@@ -25,12 +25,15 @@ class CaseLibraryTest {
     static Evaluation evaluation;
     static Catalogue catalogue;
     static CaseLibrary library;
+    /** Both libraries: every rule about a usable case holds for the held-out cases too. */
+    static List<CaseLibrary> libraries;
 
     @BeforeAll
     static void load() {
         evaluation = new Evaluation();
         catalogue = evaluation.kb.catalogue();
         library = CaseLibrary.load(CaseLibrary.DEFAULT_DIR);
+        libraries = List.of(library, CaseLibrary.load(CaseLibrary.HELD_OUT_DIR));
     }
 
     @Test
@@ -44,13 +47,13 @@ class CaseLibraryTest {
 
     @Test
     void everyCaseIsValidAgainstTheCatalogue() {
-        List<String> problems = library.problems(catalogue);
+        List<String> problems = libraries.stream().flatMap(l -> l.problems(catalogue).stream()).toList();
         assertTrue(problems.isEmpty(), String.join("\n", problems));
     }
 
     @Test
     void theServiceAcceptsEveryPresentingRequest() {
-        assertAll(library.all().stream().map(c -> () -> assertDoesNotThrow(() -> evaluation.service.diagnose(c.request()),
+        assertAll(libraries.stream().flatMap(l -> l.all().stream()).map(c -> () -> assertDoesNotThrow(() -> evaluation.service.diagnose(c.request()),
                 c.id() + " is rejected")));
     }
 
@@ -58,7 +61,7 @@ class CaseLibraryTest {
     @Test
     void presentingReadingsAgreeWithTheCaseAnswers() {
         ReadingProbe probe = new ReadingProbe(evaluation.service, catalogue);
-        assertAll(library.all().stream().flatMap(c -> probe.knownFromReadings(c.request()).entrySet().stream()
+        assertAll(libraries.stream().flatMap(l -> l.all().stream()).flatMap(c -> probe.knownFromReadings(c.request()).entrySet().stream()
                 .map(e -> () -> assertEquals(c.answer(catalogue.checks().get(e.getKey())), e.getValue(),
                         c.id() + ": reading implies " + e.getKey() + "=" + e.getValue()))));
     }

@@ -1,19 +1,28 @@
 package dev.positioner.evaluation;
 
 import dev.positioner.diagnosis.DiagnosisResponse.HypothesisView;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.Predicate;
 import java.util.function.ToDoubleFunction;
 
 /**
- * The figures of one evaluation run and their Markdown rendering. Ranks count from 1; "first" is
- * the answer to the presenting request, "end" the answer after the last check of the session.
+ * The figures of one evaluation run over one set of cases and their Markdown rendering. Ranks count
+ * from 1; "first" is the answer to the presenting request, "end" the answer after the last check of
+ * the session.
  */
-public record EvaluationReport(List<CaseResult> results, String settings) {
+public record EvaluationReport(String title, List<CaseResult> results, String settings) {
 
     public EvaluationReport(List<CaseResult> results) {
-        this(results, "");
+        this("case library", results, "");
+    }
+
+    /** The same figures over the cases of both reports together. */
+    public EvaluationReport with(String combinedTitle, EvaluationReport other) {
+        List<CaseResult> all = new ArrayList<>(results);
+        all.addAll(other.results);
+        return new EvaluationReport(combinedTitle, all, settings);
     }
 
     public int cases() {
@@ -71,15 +80,31 @@ public record EvaluationReport(List<CaseResult> results, String settings) {
 
     private double shareOf(boolean atypical, Predicate<CaseResult> p) {
         List<CaseResult> sub = results.stream().filter(r -> r.c().atypical() == atypical).toList();
-        return new EvaluationReport(sub, settings).share(p);
+        return new EvaluationReport(title, sub, settings).share(p);
     }
 
     public String markdown() {
-        StringBuilder md = new StringBuilder("# Evaluation of the diagnosis on the case library\n\n");
+        StringBuilder md = new StringBuilder("# Evaluation of the diagnosis: " + title + "\n\n");
         md.append("Invented cases replayed as guided sessions (each next check answered from the case's truth) and, for\n")
           .append("comparison, with the checks done quickest first until one cause reaches the stopping probability.\n")
           .append("Minutes are the catalogue minutes of the checks made (no bypass penalty). Service settings: ")
           .append(settings.isEmpty() ? "as configured" : settings).append(".\n\n");
+        summary(md);
+        md.append("\n## Per case\n\n| case | truth | first rank | first leader | final leader (guided) | acted on first | checks | min | final leader (cheapest first) | checks | min |\n")
+          .append("| --- | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- |\n");
+        for (CaseResult r : results) {
+            md.append(String.format(Locale.ROOT, "| %s%s | %s | %d | %s | %s%s | %s | %d | %s | %s%s | %d | %s |%n",
+                    r.c().id(), r.c().atypical() ? " (atypical)" : "", r.c().truth(), r.guided().firstRank(),
+                    hyp(r.guided().first().hypotheses().get(0)), hyp(r.guided().finalLeader()), r.guided().solved() ? "" : " **miss**",
+                    r.guided().firstActedOn(), r.guided().steps().size(), num(r.guided().minutes()), hyp(r.baseline().finalLeader()),
+                    r.baseline().solved() ? "" : " **miss**", r.baseline().steps().size(), num(r.baseline().minutes())));
+        }
+        misses(md);
+        return md.toString();
+    }
+
+    /** The headline figures as a Markdown table. */
+    public StringBuilder summary(StringBuilder md) {
         long atypical = results.stream().filter(r -> r.c().atypical()).count();
         md.append("| figure | value | target |\n| --- | --- | --- |\n");
         row(md, "cases (atypical)", cases() + " (" + atypical + ")", "");
@@ -99,17 +124,7 @@ public record EvaluationReport(List<CaseResult> results, String settings) {
         row(md, "mean checks, guided / cheapest first", num(meanChecksGuided()) + " / " + num(meanChecksBaseline()), "");
         row(md, "mean bypass checks, guided / cheapest first", num(mean(r -> r.guided().bypassChecks())) + " / "
                 + num(mean(r -> r.baseline().bypassChecks())), "");
-        md.append("\n## Per case\n\n| case | truth | first rank | first leader | final leader (guided) | acted on first | checks | min | final leader (cheapest first) | checks | min |\n")
-          .append("| --- | --- | --- | --- | --- | --- | --- | --- | --- | --- | --- |\n");
-        for (CaseResult r : results) {
-            md.append(String.format(Locale.ROOT, "| %s%s | %s | %d | %s | %s%s | %s | %d | %s | %s%s | %d | %s |%n",
-                    r.c().id(), r.c().atypical() ? " (atypical)" : "", r.c().truth(), r.guided().firstRank(),
-                    hyp(r.guided().first().hypotheses().get(0)), hyp(r.guided().finalLeader()), r.guided().solved() ? "" : " **miss**",
-                    r.guided().firstActedOn(), r.guided().steps().size(), num(r.guided().minutes()), hyp(r.baseline().finalLeader()),
-                    r.baseline().solved() ? "" : " **miss**", r.baseline().steps().size(), num(r.baseline().minutes())));
-        }
-        misses(md);
-        return md.toString();
+        return md;
     }
 
     private void misses(StringBuilder md) {
