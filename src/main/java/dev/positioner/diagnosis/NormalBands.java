@@ -36,8 +36,14 @@ final class NormalBands {
     static final double MAX_WORKING_CST = 100, MIN_WORKING_CST = 10, OIL_HOT_DEGC = 65;
     /** Grade assumed when none is given: the most common grade in such systems (from memory). */
     static final IsoVgGrade DEFAULT_GRADE = IsoVgGrade.VG46;
-    /** A stroke half as long again as design is clearly slow (common practice). */
-    static final double STROKE_SLOW_FACTOR = 1.5;
+    /**
+     * Against a stated design (reference) stroke time: more than 25 % longer is slow for strokes over
+     * 10 s, more than 50 % for shorter ones. These are the stroke-time acceptance limits of the ASME
+     * OM Code (Subsection ISTC, power-operated valves), recalled from memory, clause not checked here.
+     */
+    static final double STROKE_SLOW_FACTOR_LONG = 1.25, STROKE_SLOW_FACTOR_SHORT = 1.5, LONG_STROKE_S = 10;
+    /** Against the ideal fill time of the swept volume, which is a lower bound: 1.5 x (common practice). */
+    static final double STROKE_SLOW_FACTOR_CALCULATED = 1.5;
     /** Creep above 0.5 % of travel per minute at steady signal is abnormal (from memory). */
     static final double CREEP_PERCENT_PER_MIN = 0.5;
     /** Reservoir sight glass: below 30 % is low, above 95 % is overfilled (from memory). */
@@ -130,26 +136,32 @@ final class NormalBands {
     }
 
     /**
-     * Stroke times are slow beyond 1.5 x the design time; without one, beyond 1.5 x the time the
-     * rated pump flow needs to fill the swept volume (a lower bound: the pilot spool may limit more).
+     * Stroke times are slow beyond the acceptance limit on the design time (see
+     * {@link #STROKE_SLOW_FACTOR_LONG}); without one, beyond 1.5 x the time the rated pump flow needs
+     * to fill the swept volume (a lower bound: the pilot spool may limit more).
      */
     private static void strokeBands(AssetSpec asset, List<Object> facts) {
         Double design = asset.value("design_stroke_time");
-        String basis = "1.5 x the design stroke time, common practice";
-        if (design == null && asset.value("piston_bore") != null && asset.value("stroke_length") != null
+        double factor;
+        String basis;
+        if (design != null) {
+            factor = design > LONG_STROKE_S ? STROKE_SLOW_FACTOR_LONG : STROKE_SLOW_FACTOR_SHORT;
+            basis = String.format(Locale.ROOT, "design %.0f s + %.0f %%, stroke-time acceptance limit after the ASME OM Code (from memory)",
+                    design, (factor - 1) * 100);
+        } else if (asset.value("piston_bore") != null && asset.value("stroke_length") != null
                 && asset.value("pump_rated_flow") != null) {
             var expected = expectedStroke(asset);
             design = expected.seconds();
-            basis = String.format(Locale.ROOT, "1.5 x %.0f s, the swept volume over the %s", design,
+            factor = STROKE_SLOW_FACTOR_CALCULATED;
+            basis = String.format(Locale.ROOT, "1.5 x %.0f s, the swept volume over the %s, common practice", design,
                     expected.limitedBy() == ActuatorPerformance.Limit.PUMP ? "rated pump flow" : "pilot spool's orifice flow");
             facts.add(new Calculated("stroke_time_expected", design, "s"));
-        }
-        if (design == null) {
+        } else {
             facts.add(new Assumption("No design stroke time (nor bore, stroke and pump flow) given: measured stroke times are reported but not judged."));
             return;
         }
-        facts.add(new Band("stroke_time_open", Double.NaN, design * STROKE_SLOW_FACTOR, "s", basis));
-        facts.add(new Band("stroke_time_close", Double.NaN, design * STROKE_SLOW_FACTOR, "s", basis));
+        facts.add(new Band("stroke_time_open", Double.NaN, design * factor, "s", basis));
+        facts.add(new Band("stroke_time_close", Double.NaN, design * factor, "s", basis));
     }
 
     /**

@@ -59,7 +59,7 @@ class DiagnosisResourceTest {
                          "asset": {"tag": "PV-2041"}}""")
                 .post("/api/v1/diagnoses")
                 .then().statusCode(200)
-                // PV-2041 is designed for a 40 s stroke: 95 s is beyond 1.5 x 40 = 60 s.
+                // PV-2041 is designed for a 40 s stroke: 95 s is beyond the 25 % acceptance limit (50 s).
                 .body("findings.code", hasItem("stroke_time_open_high"))
                 .body("decision.rulesFired", hasItem("INT-MOT-01"))
                 .body("assumptions", not(hasItem(containsString("No design stroke time"))));

@@ -16,10 +16,10 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
- * Replays the whole case library and holds the diagnosis to the targets of the issue: top-3 from the
- * presenting information at least 90 % (met on the typical cases only, so far), top-1 at the end at
- * least 95 %, and on average at most half the minutes of doing the checks quickest first. Writes
- * target/evaluation-report.md.
+ * Replays both case sets (development and held-out) and holds the diagnosis to the targets of the
+ * issue: top-3 from the presenting information at least 90 % (not met: see the floors below), top-1
+ * at the end at least 95 %, and on average at most half the minutes of doing the checks quickest
+ * first. Writes target/evaluation-report.md.
  */
 class EvaluationTest {
 
@@ -58,14 +58,16 @@ class EvaluationTest {
     }
 
     /**
-     * The issue's target is 90 % over all cases; the library reaches it on the typical cases but not
-     * over all (see README, evaluation). These floors hold what has been reached so a change to the
-     * knowledge base cannot lose it unnoticed; raise them as the knowledge base improves.
+     * The issue's target is 90 % over all cases; it is not reached (see README, evaluation). These
+     * floors hold what has been reached, so a change to the knowledge base cannot lose it unnoticed;
+     * raise them as the knowledge base improves, and never lower them to let a change through.
      */
     @Test
     void topThreeFromThePresentingInformationHoldsWhatHasBeenReached() {
-        assertTrue(report.top3First() >= 0.80, "top-3 from the first request: " + report.top3First() + " (target 0.90)");
-        assertTrue(report.top3FirstTypical() >= 0.90, "top-3 from the first request, typical cases: " + report.top3FirstTypical());
+        assertAll(
+                () -> assertTrue(report.top3First() >= 0.80, "all cases: " + report.top3First() + " (target 0.90)"),
+                () -> assertTrue(development.top3FirstTypical() >= 0.90, "typical development cases: " + development.top3FirstTypical()),
+                () -> assertTrue(heldOut.top3First() >= 0.75, "held-out cases: " + heldOut.top3First()));
     }
 
     @Test
