@@ -112,4 +112,32 @@ class RuleEngineTest {
                 new Reading("commanded_signal", 50.0, "percent", 12.0, "mA"));
         assertTrue(o.observations().contains(new Observation("verify_input_signal", "deviates", "reading:input_signal")));
     }
+
+    @Test
+    void withoutAMeasuredInputTheStemIsJudgedAgainstTheCommand() {
+        // 20 % commanded, stem at 100 %: 80 % of travel off, near neither end of the signal.
+        RuleOutcome o = run(reading("commanded_signal", 20, "percent"), reading("stem_position", 100, "percent"));
+        assertTrue(o.firedRules().containsAll(List.of("INT-POS-05", "INT-POS-01", "INT-POS-02")), o.firedRules().toString());
+        assertTrue(o.findings().stream().anyMatch(f -> f.code().equals("position_error") && f.text().startsWith("With the controller sending")));
+    }
+
+    @Test
+    void anErrorAgainstTheCommandSaysNothingOfTheCalibration() {
+        // Stem at 6 % with 0 % commanded: a position error, but the signal may be what is off.
+        RuleOutcome o = run(reading("commanded_signal", 0, "percent"), reading("stem_position", 6, "percent"));
+        assertTrue(o.firedRules().contains("INT-POS-02"), o.firedRules().toString());
+        assertFalse(o.firedRules().contains("INT-POS-03"));
+        // The same stem against a measured 0 % input is a zero error.
+        assertTrue(run(reading("input_signal", 0, "percent"), reading("stem_position", 6, "percent")).firedRules().contains("INT-POS-03"));
+    }
+
+    @Test
+    void aMeasuredInputIsTheReferenceEvenWhenTheCommandIsKnown() {
+        // Input measured at 5 %, command 50 %: the stem at 5 % follows its input; the signal is what is wrong.
+        RuleOutcome o = run(reading("input_signal", 5, "percent"), reading("commanded_signal", 50, "percent"),
+                reading("stem_position", 5, "percent"));
+        assertFalse(o.firedRules().contains("INT-POS-05"));
+        assertFalse(o.firedRules().contains("INT-POS-01"), o.firedRules().toString());
+        assertTrue(o.observations().contains(new Observation("verify_input_signal", "deviates", "reading:input_signal")));
+    }
 }

@@ -78,6 +78,21 @@ public record EvaluationReport(String title, List<CaseResult> results, String se
         return results.stream().mapToDouble(f).average().orElse(0);
     }
 
+    /** Top-3 from the first request on the cases whose request carries readings, or only symptoms. */
+    public double top3FirstWhere(boolean withReadings) {
+        List<CaseResult> sub = results.stream().filter(r -> hasReadings(r) == withReadings).toList();
+        return new EvaluationReport(title, sub, settings).share(r -> r.guided().firstRank() <= 3);
+    }
+
+    private long countWhere(boolean withReadings) {
+        return results.stream().filter(r -> hasReadings(r) == withReadings).count();
+    }
+
+    private static boolean hasReadings(CaseResult r) {
+        var m = r.c().request().measurements();
+        return m != null && !m.isEmpty();
+    }
+
     private double shareOf(boolean atypical, Predicate<CaseResult> p) {
         List<CaseResult> sub = results.stream().filter(r -> r.c().atypical() == atypical).toList();
         return new EvaluationReport(title, sub, settings).share(p);
@@ -112,6 +127,8 @@ public record EvaluationReport(String title, List<CaseResult> results, String se
         row(md, "top-3 from the first request", pct(top3First()), ">= 90 %");
         row(md, "top-3 from the first request, typical / atypical cases",
                 pct(top3FirstTypical()) + " / " + pct(shareOf(true, r -> r.guided().firstRank() <= 3)), "");
+        row(md, "top-3 from the first request, requests with readings / symptoms only",
+                pct(top3FirstWhere(true)) + " of " + countWhere(true) + " / " + pct(top3FirstWhere(false)) + " of " + countWhere(false), "");
         row(md, "top-1 at the end, guided", pct(top1End()), ">= 95 %");
         row(md, "top-1 at the end, guided, typical / atypical cases",
                 pct(shareOf(false, r -> r.guided().solved())) + " / " + pct(shareOf(true, r -> r.guided().solved())), "");

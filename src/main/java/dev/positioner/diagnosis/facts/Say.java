@@ -44,7 +44,8 @@ public final class Say {
     public static Finding positionError(Reading input, Reading position) {
         double error = position.value() - input.value();
         return new Finding("position_error", String.format(Locale.ROOT,
-                "With %s at the positioner the stem sits at %s: %s %% of travel off (more than 2 %% counts).",
+                ("commanded_signal".equals(input.quantity()) ? "With the controller sending %s" : "With %s at the positioner")
+                        + " the stem sits at %s: %s %% of travel off (more than 2 %% counts).",
                 show(input.givenValue(), input.givenUnit()), show(position.givenValue(), position.givenUnit()), fmt(error)),
                 error, "percent", "within ±2 % of travel");
     }
