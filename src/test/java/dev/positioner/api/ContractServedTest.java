@@ -4,6 +4,7 @@ import static io.restassured.RestAssured.given;
 import static org.hamcrest.Matchers.equalTo;
 import static org.hamcrest.Matchers.greaterThan;
 import static org.hamcrest.Matchers.hasItem;
+import static org.hamcrest.Matchers.hasItems;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 
 import io.quarkus.test.junit.QuarkusTest;
@@ -25,7 +26,8 @@ class ContractServedTest {
         given().filter(Contract.VALIDATED).get("/api/v1/knowledge-base")
                 .then().statusCode(200)
                 .body("faults", equalTo(29))
-                .body("checks", equalTo(31))
+                .body("checks", equalTo(33))
+                .body("checkCodes", hasItems("watch_supply_during_stroke", "read_pump_inlet_vacuum"))
                 .body("rules", greaterThan(30))
                 .body("faultCodes", hasItem("pump_worn"));
     }
