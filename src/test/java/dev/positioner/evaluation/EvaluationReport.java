@@ -78,24 +78,19 @@ public record EvaluationReport(String title, List<CaseResult> results, String se
         return results.stream().mapToDouble(f).average().orElse(0);
     }
 
-    /** Top-3 from the first request on the cases whose request carries readings, or only symptoms. */
-    public double top3FirstWhere(boolean withReadings) {
-        List<CaseResult> sub = results.stream().filter(r -> hasReadings(r) == withReadings).toList();
-        return new EvaluationReport(title, sub, settings).share(r -> r.guided().firstRank() <= 3);
-    }
-
-    private long countWhere(boolean withReadings) {
-        return results.stream().filter(r -> hasReadings(r) == withReadings).count();
-    }
-
-    private static boolean hasReadings(CaseResult r) {
-        var m = r.c().request().measurements();
-        return m != null && !m.isEmpty();
+    /** The same figures over the cases {@code which} selects. */
+    EvaluationReport within(Predicate<CaseResult> which) {
+        return new EvaluationReport(title, results.stream().filter(which).toList(), settings);
     }
 
     private double shareOf(boolean atypical, Predicate<CaseResult> p) {
-        List<CaseResult> sub = results.stream().filter(r -> r.c().atypical() == atypical).toList();
-        return new EvaluationReport(title, sub, settings).share(p);
+        return within(r -> r.c().atypical() == atypical).share(p);
+    }
+
+    /** Whether the case's presenting request carries readings, not only symptoms. */
+    static boolean hasReadings(CaseResult r) {
+        var m = r.c().request().measurements();
+        return m != null && !m.isEmpty();
     }
 
     public String markdown() {
@@ -128,7 +123,7 @@ public record EvaluationReport(String title, List<CaseResult> results, String se
         row(md, "top-3 from the first request, typical / atypical cases",
                 pct(top3FirstTypical()) + " / " + pct(shareOf(true, r -> r.guided().firstRank() <= 3)), "");
         row(md, "top-3 from the first request, requests with readings / symptoms only",
-                pct(top3FirstWhere(true)) + " of " + countWhere(true) + " / " + pct(top3FirstWhere(false)) + " of " + countWhere(false), "");
+                top3Of(within(EvaluationReport::hasReadings)) + " / " + top3Of(within(r -> !hasReadings(r))), "");
         row(md, "top-1 at the end, guided", pct(top1End()), ">= 95 %");
         row(md, "top-1 at the end, guided, typical / atypical cases",
                 pct(shareOf(false, r -> r.guided().solved())) + " / " + pct(shareOf(true, r -> r.guided().solved())), "");
@@ -164,6 +159,10 @@ public record EvaluationReport(String title, List<CaseResult> results, String se
         if (!any) {
             md.append("None.\n");
         }
+    }
+
+    private static String top3Of(EvaluationReport sub) {
+        return pct(sub.top3First()) + " of " + sub.cases();
     }
 
     private static String top3(List<HypothesisView> h) {

@@ -41,15 +41,7 @@ class EvaluationTest {
             md.append("## ").append(r.title()).append("\n\n");
             r.summary(md).append('\n');
         }
-        ModelCeiling.Result ceiling = new ModelCeiling(evaluation.service, evaluation.kb.catalogue()).run();
-        md.append(String.format(java.util.Locale.ROOT, """
-                ## Ceiling from symptoms alone under the knowledge base's own tables
-
-                %d jobs drawn from the catalogue's own P(symptom | fault), each reporting 1 to %d of the symptoms
-                present and nothing else: top-3 from the first request %.1f %% with faults weighted by their priors,
-                %.1f %% with every fault drawn equally often (as in the case library).
-
-                """, ceiling.draws(), ModelCeiling.MAX_REPORTED, 100 * ceiling.top3PriorWeighted(), 100 * ceiling.top3EveryFaultAlike()));
+        md.append(new ModelCeiling(evaluation.service, evaluation.kb.catalogue()).run().markdown());
         md.append(development.markdown()).append('\n').append(heldOut.markdown());
         Path out = Path.of("target", "evaluation-report.md");
         Files.createDirectories(out.getParent());

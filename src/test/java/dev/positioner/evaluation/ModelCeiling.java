@@ -8,6 +8,7 @@ import dev.positioner.knowledge.SymptomDef;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import java.util.Locale;
 import java.util.Random;
 
 /**
@@ -23,6 +24,17 @@ import java.util.Random;
 final class ModelCeiling {
 
     record Result(int draws, double top3PriorWeighted, double top3EveryFaultAlike) {
+
+        String markdown() {
+            return String.format(Locale.ROOT, """
+                    ## Ceiling from symptoms alone under the knowledge base's own tables
+
+                    %d jobs drawn from the catalogue's own P(symptom | fault), each reporting 1 to %d of the symptoms
+                    present and nothing else: top-3 from the first request %.1f %% with faults weighted by their priors,
+                    %.1f %% with every fault drawn equally often (as in the case library).
+
+                    """, draws, MAX_REPORTED, 100 * top3PriorWeighted, 100 * top3EveryFaultAlike);
+        }
     }
 
     static final int DRAWS_PER_FAULT = 60;
