@@ -31,6 +31,13 @@ public final class CaseLibrary {
      * evaluation figures: the held-out measure of how the knowledge base generalises.
      */
     public static final Path HELD_OUT_DIR = Path.of("src/test/resources/cases-heldout");
+    /**
+     * A second set written the same way, later, by another writer with the same codes-only sheet;
+     * first run against the knowledge base exactly as it stood when the set was written.
+     */
+    public static final Path HELD_OUT_2_DIR = Path.of("src/test/resources/cases-heldout2");
+    /** Every case set, development first. */
+    public static final List<Path> ALL_DIRS = List.of(DEFAULT_DIR, HELD_OUT_DIR, HELD_OUT_2_DIR);
     static final int MAX_PRESENTING_SYMPTOMS = 3;
 
     private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory());

@@ -25,7 +25,7 @@ class CaseLibraryTest {
     static Evaluation evaluation;
     static Catalogue catalogue;
     static CaseLibrary library;
-    /** Both libraries: every rule about a usable case holds for the held-out cases too. */
+    /** Every library: every rule about a usable case holds for the held-out cases too. */
     static List<CaseLibrary> libraries;
 
     @BeforeAll
@@ -33,7 +33,7 @@ class CaseLibraryTest {
         evaluation = new Evaluation();
         catalogue = evaluation.kb.catalogue();
         library = CaseLibrary.load(CaseLibrary.DEFAULT_DIR);
-        libraries = List.of(library, CaseLibrary.load(CaseLibrary.HELD_OUT_DIR));
+        libraries = CaseLibrary.ALL_DIRS.stream().map(CaseLibrary::load).toList();
     }
 
     @Test
@@ -57,13 +57,15 @@ class CaseLibraryTest {
                 c.id() + " is rejected")));
     }
 
-    /** A gauge reading in the request and the case's answer for the same check must tell the same story. */
+    /**
+     * In the development cases a gauge reading in the request and the case's answer for the same
+     * check must tell the same story. The held-out writers' readings are not corrected to agree:
+     * where they read a gauge differently from the knowledge base, the evaluation report lists it.
+     */
     @Test
     void presentingReadingsAgreeWithTheCaseAnswers() {
-        ReadingProbe probe = new ReadingProbe(evaluation.service, catalogue);
-        assertAll(libraries.stream().flatMap(l -> l.all().stream()).flatMap(c -> probe.knownFromReadings(c.request()).entrySet().stream()
-                .map(e -> () -> assertEquals(c.answer(catalogue.checks().get(e.getKey())), e.getValue(),
-                        c.id() + ": reading implies " + e.getKey() + "=" + e.getValue()))));
+        List<String> disagreements = ReadingProbe.disagreements(evaluation.service, catalogue, library.all());
+        assertTrue(disagreements.isEmpty(), String.join("\n", disagreements));
     }
 
     @Test

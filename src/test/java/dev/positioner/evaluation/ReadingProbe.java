@@ -34,6 +34,21 @@ final class ReadingProbe {
         this.catalogue = catalogue;
     }
 
+    /** Each case whose readings imply a check outcome other than the case's own answer, one line each. */
+    static List<String> disagreements(DiagnosisService service, Catalogue catalogue, List<EvaluationCase> cases) {
+        ReadingProbe probe = new ReadingProbe(service, catalogue);
+        List<String> out = new ArrayList<>();
+        for (EvaluationCase c : cases) {
+            probe.knownFromReadings(c.request()).forEach((check, outcome) -> {
+                String answer = c.answer(catalogue.checks().get(check));
+                if (!answer.equals(outcome)) {
+                    out.add(c.id() + ": the readings imply " + check + " = " + outcome + ", the writer answers " + answer);
+                }
+            });
+        }
+        return out;
+    }
+
     Map<String, String> knownFromReadings(DiagnosisRequest presenting) {
         int rounds = catalogue.checks().values().stream().mapToInt(c -> c.outcomes().size()).max().orElse(0);
         List<Set<String>> disagreeing = new ArrayList<>();
