@@ -50,8 +50,8 @@ class KnowledgeBaseValidationTest {
         edit(rules.resolve("catalogue/faults.yaml"), "    prior: 0.045\n", "    prior: 1.45\n");
         edit(rules.resolve("catalogue/checks.yaml"), "otherwise: {normal: 0.92, low: 0.05, high: 0.03}",
                 "otherwise: {normal: 0.82, low: 0.05, high: 0.03}");
-        edit(rules.resolve("catalogue/checks.yaml"), "      pump_worn: {normal: 0.25, low: 0.73, high: 0.02}",
-                "      pump_wron: {normal: 0.25, low: 0.73, high: 0.02}");
+        edit(rules.resolve("catalogue/checks.yaml"), "      pump_worn: {normal: 0.58, low: 0.4, high: 0.02}",
+                "      pump_wron: {normal: 0.58, low: 0.4, high: 0.02}");
         edit(rules.resolve("catalogue/symptoms.yaml"), "source: [from_memory]", "source: [hearsay]");
         edit(rules.resolve("context/hunting.drl"), "rule \"CTX-HUN-02 ", "rule \"cycling ");
         edit(rules.resolve("safety/cautions.drl"), "new Caution(\"hot_oil\")", "new Caution(\"hot_oill\")");
