@@ -36,8 +36,13 @@ public final class CaseLibrary {
      * first run against the knowledge base exactly as it stood when the set was written.
      */
     public static final Path HELD_OUT_2_DIR = Path.of("src/test/resources/cases-heldout2");
+    /**
+     * A third set written the same way by a third writer after the changes the second set prompted:
+     * the blind measure of those changes.
+     */
+    public static final Path HELD_OUT_3_DIR = Path.of("src/test/resources/cases-heldout3");
     /** Every case set, development first. */
-    public static final List<Path> ALL_DIRS = List.of(DEFAULT_DIR, HELD_OUT_DIR, HELD_OUT_2_DIR);
+    public static final List<Path> ALL_DIRS = List.of(DEFAULT_DIR, HELD_OUT_DIR, HELD_OUT_2_DIR, HELD_OUT_3_DIR);
     static final int MAX_PRESENTING_SYMPTOMS = 3;
 
     private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory());
