@@ -12,6 +12,8 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -41,15 +43,16 @@ class EvaluationTest {
         heldOut = replay("held-out cases", CaseLibrary.HELD_OUT_DIR);
         heldOut2 = replay("second held-out cases", CaseLibrary.HELD_OUT_2_DIR);
         heldOut3 = replay("third held-out cases", CaseLibrary.HELD_OUT_3_DIR);
-        report = development.with("all cases", heldOut).with("all cases", heldOut2).with("all cases", heldOut3);
+        List<EvaluationReport> sets = List.of(development, heldOut, heldOut2, heldOut3);
+        report = sets.stream().skip(1).reduce(development, (all, set) -> all.with("all cases", set));
         StringBuilder md = new StringBuilder("# Evaluation summary\n\n");
-        for (EvaluationReport r : List.of(report, development, heldOut, heldOut2, heldOut3)) {
+        for (EvaluationReport r : Stream.concat(Stream.of(report), sets.stream()).toList()) {
             md.append("## ").append(r.title()).append("\n\n");
             r.summary(md).append('\n');
         }
         md.append(readingDisagreements()).append('\n');
         md.append(new ModelCeiling(evaluation.service, evaluation.kb.catalogue()).run().markdown());
-        md.append(development.markdown()).append('\n').append(heldOut.markdown()).append('\n').append(heldOut2.markdown()).append('\n').append(heldOut3.markdown());
+        md.append(sets.stream().map(EvaluationReport::markdown).collect(Collectors.joining("\n")));
         Path out = Path.of("target", "evaluation-report.md");
         Files.createDirectories(out.getParent());
         Files.writeString(out, md);
