@@ -50,7 +50,7 @@ class EvaluationTest {
             md.append("## ").append(r.title()).append("\n\n");
             r.summary(md).append('\n');
         }
-        md.append(readingDisagreements()).append('\n');
+        md.append(readingDisagreements(sets.subList(1, sets.size()))).append('\n');
         md.append(new ModelCeiling(evaluation.service, evaluation.kb.catalogue()).run().markdown());
         md.append(sets.stream().map(EvaluationReport::markdown).collect(Collectors.joining("\n")));
         Path out = Path.of("target", "evaluation-report.md");
@@ -60,8 +60,8 @@ class EvaluationTest {
     }
 
     /** Where a held-out writer reads a gauge differently from the knowledge base (their answer is kept). */
-    private static String readingDisagreements() {
-        List<EvaluationCase> heldOutCases = CaseLibrary.ALL_DIRS.stream().skip(1).flatMap(d -> CaseLibrary.load(d).all().stream()).toList();
+    private static String readingDisagreements(List<EvaluationReport> heldOutSets) {
+        List<EvaluationCase> heldOutCases = heldOutSets.stream().flatMap(r -> r.results().stream().map(CaseResult::c)).toList();
         List<String> lines = ReadingProbe.disagreements(evaluation.service, evaluation.kb.catalogue(), heldOutCases);
         StringBuilder md = new StringBuilder("## Held-out readings read differently by the writer and the knowledge base\n\n");
         if (lines.isEmpty()) {
