@@ -21,7 +21,8 @@ import java.util.Map;
 /**
  * What the readings mean by calculation, for this valve: the drain-line drop thick oil would cause,
  * the thrust the measured supply can make, the ISO 4406 code of a particle count, the leakage a
- * creep rate implies, pump efficiency and the actuator's hydraulic natural frequency. Each result
+ * creep rate implies, pump efficiency, the actuator's hydraulic natural frequency and whether the
+ * pump alone can make the design stroke. Each result
  * is a {@link Finding} for the technician and, where a rule needs it, a {@link Calculated} fact.
  * The methods and their sources are in {@code dev.positioner.hydraulics}.
  */
@@ -49,6 +50,7 @@ final class EngineeringFindings {
         f.leakage();
         f.pumpEfficiency();
         f.naturalFrequency();
+        f.strokeDemand();
         return f.facts;
     }
 
@@ -169,6 +171,33 @@ final class EngineeringFindings {
         facts.add(new Finding("hydraulic_natural_frequency", String.format(Locale.ROOT,
                 "The oil column's natural frequency is about %.0f Hz, %.0f Hz with 1 %% free air; the valve cycles at %.2f Hz.",
                 dry, aerated, measured), aerated, "Hz", null));
+    }
+
+    /**
+     * Whether the pump alone can make the design stroke: the full-bore swept volume over the design
+     * stroke time against the rated pump flow. Above 1 the accumulator carries part of every full
+     * stroke, and without its charge the stroke can be no quicker than the pump alone fills the bore.
+     */
+    private void strokeDemand() {
+        Double bore = asset.value("piston_bore");
+        Double stroke = asset.value("stroke_length");
+        Double design = asset.value("design_stroke_time");
+        Double pump = asset.value("pump_rated_flow");
+        if (bore == null || stroke == null || design == null || pump == null) {
+            return;
+        }
+        double area = ActuatorPerformance.areas(bore, 0).bore();
+        double demand = ActuatorPerformance.strokeDemandFlow(area, stroke, design);
+        double ratio = demand / pump;
+        double pumpOnly = ActuatorPerformance.expectedStrokeTime(area, stroke, pump, Double.MAX_VALUE).seconds();
+        facts.add(new Calculated("stroke_demand_over_pump", ratio, "ratio"));
+        String verdict = ratio > 1
+                ? String.format(Locale.ROOT, "the accumulator supplies about %.0f %% of it, and without its charge a full stroke takes at least %.0f s",
+                        100 * (1 - 1 / ratio), pumpOnly)
+                : String.format(Locale.ROOT, "the pump alone can make it (a full stroke on the pump alone takes about %.0f s)", pumpOnly);
+        facts.add(new Finding("stroke_demand", String.format(Locale.ROOT,
+                "A full stroke in the design %.0f s draws about %.1f L/min against the pump's rated %.1f L/min: %s.",
+                design, demand * 60_000, pump * 60_000, verdict), ratio, "ratio", null));
     }
 
     private Double flowForReturn() {

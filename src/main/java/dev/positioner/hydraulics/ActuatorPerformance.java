@@ -96,6 +96,17 @@ public final class ActuatorPerformance {
         return new StrokeTime(volume / flow, volume, flow, pumpLimits ? Limit.PUMP : Limit.PILOT_SPOOL);
     }
 
+    /**
+     * The mean flow a full stroke in {@code seconds} draws: swept volume over time (continuity). Where
+     * it exceeds what the pump delivers, the accumulator supplies the difference during the stroke
+     * and recovers its charge between moves (the accumulator as auxiliary power source, e.g. Esposito,
+     * <em>Fluid Power with Applications</em>, ch. on accumulators).
+     */
+    public static double strokeDemandFlow(double pistonArea, double stroke, double seconds) {
+        return Checks.positive("piston area [m2]", pistonArea) * Checks.positive("stroke [m]", stroke)
+                / Checks.positive("stroke time [s]", seconds);
+    }
+
     /** Measured over expected stroke time; above 1 the valve is slower than its hydraulics allow. */
     public static double slownessRatio(double measuredSeconds, double expectedSeconds) {
         return Checks.positive("measured stroke time [s]", measuredSeconds)

@@ -3,6 +3,8 @@ package dev.positioner.diagnosis;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import dev.positioner.diagnosis.facts.Calculated;
+import dev.positioner.diagnosis.facts.Evidence;
 import dev.positioner.diagnosis.facts.Explained;
 import dev.positioner.diagnosis.facts.Observation;
 import dev.positioner.diagnosis.facts.Reading;
@@ -190,5 +192,31 @@ class RuleEngineTest {
         RuleOutcome normal = run(new Observation("check_reservoir_level", "normal", Observation.TECHNICIAN),
                 new Observation("inspect_oil_sample", "foamy", Observation.TECHNICIAN));
         assertFalse(normal.explanation("check:inspect_oil_sample").isPresent());
+    }
+
+    /** Does this valve's design stroke need the accumulator? Then a slow stroke points at its charge more. */
+    @Test
+    void aSlowStrokeWeighsOnTheAccumulatorByHowMuchTheDesignStrokeNeedsIt() {
+        ReportedSymptom slow = new ReportedSymptom("slow_stroke", true, "client");
+        assertTrue(accumulatorFactors(run(slow, new Calculated("stroke_demand_over_pump", 1.34, "ratio"))).equals(List.of(1.5)));
+        assertTrue(accumulatorFactors(run(slow, new Calculated("stroke_demand_over_pump", 0.55, "ratio"))).equals(List.of(0.5)));
+        // In between, and without the design data, the table's average stands.
+        assertTrue(accumulatorFactors(run(slow, new Calculated("stroke_demand_over_pump", 0.9, "ratio"))).isEmpty());
+        assertTrue(accumulatorFactors(run(slow)).isEmpty());
+        // A symptom and a slow stroke test on the same valve count once.
+        RuleOutcome both = run(slow, new Observation("stroke_time_test", "slow_both", Observation.TECHNICIAN),
+                new Calculated("stroke_demand_over_pump", 1.34, "ratio"));
+        assertTrue(accumulatorFactors(both).equals(List.of(1.5)), both.evidence().toString());
+        // Strokes on time on such a valve speak against a lost charge.
+        assertTrue(accumulatorFactors(run(new Observation("stroke_time_test", "normal", Observation.TECHNICIAN),
+                new Calculated("stroke_demand_over_pump", 1.34, "ratio"))).equals(List.of(0.35)));
+        // Cold oil accounts for the slow stroke: the accumulator gets nothing from it.
+        RuleOutcome cold = run(slow, new Observation("read_oil_temperature", "cold", Observation.TECHNICIAN),
+                new Calculated("stroke_demand_over_pump", 1.34, "ratio"));
+        assertTrue(accumulatorFactors(cold).isEmpty(), cold.firedRules().toString());
+    }
+
+    private static List<Double> accumulatorFactors(RuleOutcome o) {
+        return o.evidence().stream().filter(e -> e.fault().equals("accumulator_precharge_lost")).map(Evidence::factor).toList();
     }
 }

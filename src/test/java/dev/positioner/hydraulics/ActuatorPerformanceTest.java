@@ -25,6 +25,17 @@ class ActuatorPerformanceTest {
     }
 
     @Test
+    void strokeDemandAgainstThePump() {
+        // Continuity, by hand: bore 160 mm -> A = pi * 0.16^2 / 4 = 0.0201062 m2; stroke 80 mm sweeps
+        // 0.0201062 * 0.08 = 1.60850e-3 m3 (1.61 L). In 12 s that is 1.34041e-4 m3/s = 8.04 L/min, more
+        // than a 6 L/min (1e-4 m3/s) pump: the pump alone needs 1.60850e-3 / 1e-4 = 16.1 s.
+        double area = ActuatorPerformance.areas(0.16, 0).bore();
+        assertEquals(1.34041e-4, ActuatorPerformance.strokeDemandFlow(area, 0.08, 12), 1e-9);
+        assertEquals(16.085, ActuatorPerformance.expectedStrokeTime(area, 0.08, 1e-4, Double.MAX_VALUE).seconds(), 1e-3);
+        assertThrows(IllegalArgumentException.class, () -> ActuatorPerformance.strokeDemandFlow(area, 0.08, 0));
+    }
+
+    @Test
     void drainBackPressureOpposesEachStroke() {
         // Extend: ps*Abore - pd*Aannulus; retract: ps*Aannulus - pd*Abore. pd = 20 psi = 137 895 Pa:
         // extend 55 898 - 137 895 * 0.030402 = 51 706 N; retract 52 404 - 137 895 * 0.032429 = 47 932 N.
