@@ -41,8 +41,13 @@ public final class CaseLibrary {
      * the blind measure of those changes.
      */
     public static final Path HELD_OUT_3_DIR = Path.of("src/test/resources/cases-heldout3");
+    /**
+     * A fourth set written the same way by a fourth writer, after the third set had been run and the
+     * stroke-demand rules added: the blind measure of the knowledge base at that point.
+     */
+    public static final Path HELD_OUT_4_DIR = Path.of("src/test/resources/cases-heldout4");
     /** Every case set, development first. */
-    public static final List<Path> ALL_DIRS = List.of(DEFAULT_DIR, HELD_OUT_DIR, HELD_OUT_2_DIR, HELD_OUT_3_DIR);
+    public static final List<Path> ALL_DIRS = List.of(DEFAULT_DIR, HELD_OUT_DIR, HELD_OUT_2_DIR, HELD_OUT_3_DIR, HELD_OUT_4_DIR);
     static final int MAX_PRESENTING_SYMPTOMS = 3;
 
     private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory());
