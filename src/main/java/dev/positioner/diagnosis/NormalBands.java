@@ -57,6 +57,21 @@ final class NormalBands {
     static final double DEAD_BAND_HIGH = 1.0;
     /** Hysteresis above 1 % of span is large for a hydraulic positioner (common practice). */
     static final double HYSTERESIS_HIGH = 1.0;
+    /*
+     * How far off a field reading can be at a band limit (see Band: within it a reading is borderline).
+     * Pressure: ASME B40.100 accuracy Grade A, ±1 % of span over the middle half of the dial and ±2 %
+     * over the first and last quarters (grade table recalled from memory), on a gauge whose range is
+     * about twice the working pressure (common practice, so that the working point sits mid-dial):
+     * ±2 % of nominal for supply and discharge. Drain and filter gauges are low-range, taken as
+     * 0-30 psi (from memory): the 5 psi drain limit is in the first quarter (±2 % of 30 psi), the
+     * 15 psid filter limit mid-dial (±1 %). Oil temperature: a dial thermometer to ±1 % of a 0-120 degC
+     * span (ASME B40.200 Grade A, from memory). Sight glass: ±5 % of the glass by eye (from memory).
+     * Creep: stem travel read to about 0.5 % on the travel indicator over a 5-minute hold, ±0.1 % per
+     * minute (common practice, from memory).
+     */
+    static final double GAUGE_SPAN_PER_NOMINAL = 2, GAUGE_MID_ACCURACY = 0.01, GAUGE_END_ACCURACY = 0.02;
+    static final double LOW_RANGE_GAUGE_PSI = 30, THERMOMETER_MARGIN_DEGC = 1.2, LEVEL_MARGIN = 5;
+    static final double CREEP_MARGIN_PERCENT_PER_MIN = 0.1;
     /** Stroke length assumed when none is given, only to convert percent creep rates. */
     static final double DEFAULT_STROKE_M = 0.15;
 
@@ -69,21 +84,22 @@ final class NormalBands {
                 "Supply nominal not given: assumed 250 psi (17.2 bar), the usual plant value.");
         String supplyBasis = String.format(Locale.ROOT, "nominal %.0f psi ±10 %%, common practice",
                 UnitConverter.convert(supplyPa, "Pa", "psi"));
+        double supplyMargin = GAUGE_MID_ACCURACY * GAUGE_SPAN_PER_NOMINAL * supplyPa;
         facts.add(new Band("supply_pressure", supplyPa * (1 - SUPPLY_TOLERANCE), supplyPa * (1 + SUPPLY_TOLERANCE),
-                "Pa", supplyBasis));
-        facts.add(new Band("pump_discharge_pressure", supplyPa * (1 - SUPPLY_TOLERANCE), Double.NaN, "Pa", supplyBasis));
+                "Pa", supplyBasis, supplyMargin));
+        facts.add(new Band("pump_discharge_pressure", supplyPa * (1 - SUPPLY_TOLERANCE), Double.NaN, "Pa", supplyBasis, supplyMargin));
         facts.add(new Band("supply_filter_dp", Double.NaN, psi(FILTER_DP_HIGH_PSI), "Pa",
-                "change-out at about 2/3 of a 25 psid bypass, from memory"));
+                "change-out at about 2/3 of a 25 psid bypass, from memory", psi(GAUGE_MID_ACCURACY * LOW_RANGE_GAUGE_PSI)));
         facts.add(new Band("drain_pressure", Double.NaN, psi(DRAIN_HIGH_PSI), "Pa",
-                "a free-draining return reads a few psi at most, from memory"));
+                "a free-draining return reads a few psi at most, from memory", psi(GAUGE_END_ACCURACY * LOW_RANGE_GAUGE_PSI)));
         facts.add(oilBand(asset, facts));
-        facts.add(new Band("reservoir_level", LEVEL_LOW, LEVEL_HIGH, "percent", "sight-glass marks, from memory"));
+        facts.add(new Band("reservoir_level", LEVEL_LOW, LEVEL_HIGH, "percent", "sight-glass marks, from memory", LEVEL_MARGIN));
         facts.add(new Band("water_content", Double.NaN, WATER_HIGH_PPM, "ppm", "free water likely above it, from memory"));
         facts.add(new Band("dead_band", Double.NaN, DEAD_BAND_HIGH, "percent", "common practice for hydraulic positioners"));
         facts.add(new Band("hysteresis", Double.NaN, HYSTERESIS_HIGH, "percent", "common practice for hydraulic positioners"));
         double stroke = designOr(asset, "stroke_length", DEFAULT_STROKE_M, null, null);
         facts.add(new Band("creep_rate", Double.NaN, CREEP_PERCENT_PER_MIN / 100 * stroke / 60, "m_per_s",
-                "0.5 % of travel per minute, from memory"));
+                "0.5 % of travel per minute, from memory", CREEP_MARGIN_PERCENT_PER_MIN / 100 * stroke / 60));
         strokeBands(asset, facts);
         Double rated = asset.value("pump_rated_flow");
         if (rated != null) {
@@ -118,7 +134,7 @@ final class NormalBands {
             double cold = temperatureAt(grade, MAX_WORKING_CST);
             double hot = Math.min(OIL_HOT_DEGC, temperatureAt(grade, MIN_WORKING_CST));
             OIL_BANDS.put(grade, new Band("oil_temperature", cold, hot, "degC", String.format(Locale.ROOT,
-                    "%s between 100 and 10 mm2/s, ASTM D341 with VI 100", grade.name())));
+                    "%s between 100 and 10 mm2/s, ASTM D341 with VI 100", grade.name()), THERMOMETER_MARGIN_DEGC));
         }
     }
 

@@ -58,6 +58,28 @@ class RuleEngineTest {
         assertTrue(o.isSubsumed("drain_backpressure"), "the measurement is used, not the report");
     }
 
+    /**
+     * Within the gauge's accuracy of a limit a reading decides nothing (ISO 14253-1). By hand: the
+     * default supply is 250 psi, band 225-275 psi; a Grade A gauge of twice that range (0-500 psi) is
+     * good to ±1 % of span mid-dial, ±5 psi. 228 psi is 3 psi inside the limit: borderline; 219 psi is
+     * 6 psi below it: low; 231 psi is 6 psi inside: normal.
+     */
+    @Test
+    void aReadingWithinTheGaugesAccuracyOfALimitDecidesNothing() {
+        ReportedSymptom low = new ReportedSymptom("low_supply_pressure", true, "client");
+        RuleOutcome near = run(low, new Reading("supply_pressure", 228 * 6894.757, "Pa", 228, "psi"));
+        assertTrue(near.firedRules().contains("INT-GEN-04"), near.firedRules().toString());
+        assertTrue(near.observations().isEmpty(), near.observations().toString());
+        assertTrue(near.findings().stream().anyMatch(f -> f.code().equals("supply_pressure_borderline") && f.text().contains("±5.00 psi")),
+                near.findings().toString());
+        assertFalse(near.isSubsumed("low_supply_pressure"), "the report stands when the reading cannot decide");
+        assertFalse(near.firedRules().contains("CTX-CON-01"));
+        assertTrue(run(reading("supply_pressure", 219 * 6894.757, "Pa")).observations()
+                .contains(new Observation("read_supply_pressure", "low", "reading:supply_pressure")));
+        assertTrue(run(reading("supply_pressure", 231 * 6894.757, "Pa")).observations()
+                .contains(new Observation("read_supply_pressure", "normal", "reading:supply_pressure")));
+    }
+
     /** A flow-limited fault reads normal at rest and sags in motion: the low gauge someone saw stands. */
     @Test
     void aNormalSupplyAtRestKeepsALowSupplySeenInMotion() {

@@ -27,6 +27,17 @@ public final class Say {
                 show(r.givenValue(), r.givenUnit()), band(r, b)), r.givenValue(), r.givenUnit(), band(r, b));
     }
 
+    public static Finding nearBandLimit(String code, String what, Reading r, Band b) {
+        double limit = b.nearestLimit(r.value());
+        double given = toGiven(limit, r);
+        double margin = Math.abs(toGiven(limit + b.margin(), r) - given);
+        return new Finding(code, String.format(Locale.ROOT,
+                "%s %s is within the reading uncertainty (±%s) of the band limit %s: it neither confirms nor rules out a deviation,"
+                        + " so it is not counted; take it again with a calibrated test instrument if it matters.",
+                what, show(r.givenValue(), r.givenUnit()), show(margin, r.givenUnit()), show(given, r.givenUnit())),
+                r.givenValue(), r.givenUnit(), band(r, b));
+    }
+
     /** "supply_pressure" becomes "Supply pressure". */
     public static String label(String code) {
         String words = code.replace('_', ' ');
