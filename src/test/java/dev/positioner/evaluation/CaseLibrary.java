@@ -46,8 +46,14 @@ public final class CaseLibrary {
      * stroke-demand rules added: the blind measure of the knowledge base at that point.
      */
     public static final Path HELD_OUT_4_DIR = Path.of("src/test/resources/cases-heldout4");
+    /**
+     * A fifth set written the same way by a fifth writer, after the fourth had been run and readings
+     * within their instrument's uncertainty of a band limit were made borderline.
+     */
+    public static final Path HELD_OUT_5_DIR = Path.of("src/test/resources/cases-heldout5");
     /** Every case set, development first. */
-    public static final List<Path> ALL_DIRS = List.of(DEFAULT_DIR, HELD_OUT_DIR, HELD_OUT_2_DIR, HELD_OUT_3_DIR, HELD_OUT_4_DIR);
+    public static final List<Path> ALL_DIRS = List.of(DEFAULT_DIR, HELD_OUT_DIR, HELD_OUT_2_DIR, HELD_OUT_3_DIR, HELD_OUT_4_DIR,
+            HELD_OUT_5_DIR);
     static final int MAX_PRESENTING_SYMPTOMS = 3;
 
     private static final ObjectMapper YAML = new ObjectMapper(new YAMLFactory());

@@ -18,7 +18,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
 /**
- * Replays every case set (development and the four held-out sets) and holds the diagnosis to the targets of the
+ * Replays every case set (development and the five held-out sets) and holds the diagnosis to the targets of the
  * issue: top-3 from the presenting information at least 90 % (not met: see the floors below), top-1
  * at the end at least 95 %, and on average at most half the minutes of doing the checks quickest
  * first. Writes target/evaluation-report.md.
@@ -36,6 +36,8 @@ class EvaluationTest {
     static EvaluationReport heldOut3;
     /** The fourth set written blind (see {@link CaseLibrary#HELD_OUT_4_DIR}). */
     static EvaluationReport heldOut4;
+    /** The fifth set written blind (see {@link CaseLibrary#HELD_OUT_5_DIR}). */
+    static EvaluationReport heldOut5;
     static EvaluationReport report;
 
     @BeforeAll
@@ -46,7 +48,8 @@ class EvaluationTest {
         heldOut2 = replay("second held-out cases", CaseLibrary.HELD_OUT_2_DIR);
         heldOut3 = replay("third held-out cases", CaseLibrary.HELD_OUT_3_DIR);
         heldOut4 = replay("fourth held-out cases", CaseLibrary.HELD_OUT_4_DIR);
-        List<EvaluationReport> sets = List.of(development, heldOut, heldOut2, heldOut3, heldOut4);
+        heldOut5 = replay("fifth held-out cases", CaseLibrary.HELD_OUT_5_DIR);
+        List<EvaluationReport> sets = List.of(development, heldOut, heldOut2, heldOut3, heldOut4, heldOut5);
         report = sets.stream().skip(1).reduce(development, (all, set) -> all.with("all cases", set));
         StringBuilder md = new StringBuilder("# Evaluation summary\n\n");
         for (EvaluationReport r : Stream.concat(Stream.of(report), sets.stream()).toList()) {
@@ -91,7 +94,8 @@ class EvaluationTest {
      * read normal there) raised a wrong lineup above binding trim in valve_trim_binding-2, 90.0 % to
      * 87.5 % of the typical development cases, while the held-out sets gained three cases.
      * The 80 % floor is over the four sets it was set on; a new blind set gets its own floor at its
-     * first run (the fourth came in at 75.9 %, which took all cases together to 79.9 %).
+     * first run (the fourth came in at 75.9 %, which took all cases together to 79.9 %; the fifth at
+     * 82.8 %).
      */
     @Test
     void topThreeFromThePresentingInformationHoldsWhatHasBeenReached() {
@@ -105,7 +109,8 @@ class EvaluationTest {
                 () -> assertTrue(heldOut.top3First() >= 0.86, "held-out cases: " + heldOut.top3First()),
                 () -> assertTrue(heldOut2.top3First() >= 0.75, "second held-out cases: " + heldOut2.top3First()),
                 () -> assertTrue(heldOut3.top3First() >= 0.75, "third held-out cases: " + heldOut3.top3First()),
-                () -> assertTrue(heldOut4.top3First() >= 0.75, "fourth held-out cases: " + heldOut4.top3First()));
+                () -> assertTrue(heldOut4.top3First() >= 0.79, "fourth held-out cases: " + heldOut4.top3First()),
+                () -> assertTrue(heldOut5.top3First() >= 0.82, "fifth held-out cases: " + heldOut5.top3First()));
     }
 
     @Test
