@@ -40,10 +40,12 @@ public class DiagnosisService {
     private final RuleEngine engine;
     private final AssetDirectory assets;
     private final PriorSource priorSource;
+    private final SymptomRateSource rateSource;
     private final CheckPlanner planner;
     private final double stopThreshold;
 
     public DiagnosisService(KnowledgeBase knowledge, RuleEngine engine, AssetDirectory assets, PriorSource priorSource,
+            SymptomRateSource rateSource,
             @ConfigProperty(name = "positioner.stop-threshold") double stopThreshold,
             @ConfigProperty(name = "positioner.bypass-penalty-minutes") double bypassPenalty,
             @ConfigProperty(name = "positioner.minimum-outcome-chance") double minimumChance) {
@@ -51,6 +53,7 @@ public class DiagnosisService {
         this.engine = engine;
         this.assets = assets;
         this.priorSource = priorSource;
+        this.rateSource = rateSource;
         this.stopThreshold = stopThreshold;
         this.planner = new CheckPlanner(catalogue, stopThreshold, bypassPenalty, minimumChance);
     }
@@ -72,7 +75,8 @@ public class DiagnosisService {
         facts.addAll(EngineeringFindings.facts(input.asset(), readings));
         RuleOutcome outcome = engine.evaluate(facts);
 
-        List<EvidenceItem> items = EvidenceItems.from(catalogue, outcome, readings);
+        SymptomRates rates = rateSource.rates(catalogue, input.asset());
+        List<EvidenceItem> items = EvidenceItems.from(catalogue, rates, outcome, readings);
         List<Fault> hypotheses = catalogue.hypotheses();
         Priors priors = priorSource.priors(catalogue, input.asset());
         double[] prior = priors.values();
@@ -83,7 +87,7 @@ public class DiagnosisService {
         return new DiagnosisResponse(rank(hypotheses, prior, posterior, items, priors.notes()), nextCheck(plan),
                 outcome.findings().stream().map(f -> new FindingView(f.code(), f.text(),
                         Double.isNaN(f.value()) ? null : f.value(), f.unit(), f.limit())).toList(),
-                cautions(outcome, plan), assumptions(outcome, priors),
+                cautions(outcome, plan), assumptions(outcome, priors, rates),
                 new DecisionView(METHOD, stopThreshold, plan.expectedCostNow(),
                         Double.isNaN(plan.expectedCostWithCheck()) ? null : plan.expectedCostWithCheck(),
                         plan.stopReason(), List.copyOf(outcome.firedRules())));
@@ -110,9 +114,12 @@ public class DiagnosisService {
                 c.cautions().stream().map(code -> catalogue.cautions().get(code)).toList(), plan.why());
     }
 
-    private static List<String> assumptions(RuleOutcome outcome, Priors priors) {
+    private static List<String> assumptions(RuleOutcome outcome, Priors priors, SymptomRates rates) {
         List<String> out = new ArrayList<>(outcome.assumptions().stream().map(Assumption::text).distinct().toList());
         out.add(priors.basis());
+        if (rates.basis() != null) {
+            out.add(rates.basis());
+        }
         return out;
     }
 

@@ -24,7 +24,7 @@ final class EvidenceItems {
     private EvidenceItems() {
     }
 
-    static List<EvidenceItem> from(Catalogue catalogue, RuleOutcome outcome, Map<String, Reading> readings) {
+    static List<EvidenceItem> from(Catalogue catalogue, SymptomRates rates, RuleOutcome outcome, Map<String, Reading> readings) {
         List<Fault> hypotheses = catalogue.hypotheses();
         List<EvidenceItem> items = new ArrayList<>();
         Map<String, ReportedSymptom> symptoms = new LinkedHashMap<>();
@@ -37,7 +37,7 @@ final class EvidenceItems {
             }
             double[] l = new double[hypotheses.size()];
             for (int h = 0; h < l.length; h++) {
-                double present = h == l.length - 1 ? catalogue.unlistedSymptomPresent() : def.present(hypotheses.get(h).code());
+                double present = rates.present(s.code(), h);
                 l[h] = s.present() ? present : 1 - present;
             }
             String derived = s.origin().equals("client") ? "" : " (from the readings)";

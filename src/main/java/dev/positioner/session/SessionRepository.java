@@ -12,6 +12,7 @@ import java.sql.Timestamp;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /** SQL for sessions, their events and closures. Every method runs on the caller's connection. */
@@ -127,6 +128,20 @@ class SessionRepository {
     }
 
     record Keyed(SessionEvent event, String hash) {
+    }
+
+    /** The symptoms the job reported when it was closed (see V3__closure_symptoms.sql). */
+    void insertClosureSymptoms(Connection c, String sessionId, int seq, Map<String, Boolean> symptoms) throws SQLException {
+        try (PreparedStatement ps = c.prepareStatement("INSERT INTO closure_symptom (session_id, seq, symptom, present) VALUES (?, ?, ?, ?)")) {
+            for (Map.Entry<String, Boolean> s : symptoms.entrySet()) {
+                ps.setString(1, sessionId);
+                ps.setInt(2, seq);
+                ps.setString(3, s.getKey());
+                ps.setBoolean(4, s.getValue());
+                ps.addBatch();
+            }
+            ps.executeBatch();
+        }
     }
 
     void insertClosure(Connection c, ClosureRecord k) throws SQLException {

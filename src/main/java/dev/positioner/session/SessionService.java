@@ -161,6 +161,7 @@ public class SessionService {
             String site = assets.find(c, s.tag()).map(AssetRecord::site).orElse(null);
             repo.insertEvent(c, s.id(), e, key, hash);
             repo.insertClosure(c, closures.record(s, e, site));
+            repo.insertClosureSymptoms(c, s.id(), e.seq(), SessionState.of(repo.events(c, s.id(), s.lastSeq())).symptoms());
             repo.updateSession(c, s.id(), SessionRow.CLOSED, e.seq());
             return new Outcome(view(c, s, e.seq(), false), false);
         });

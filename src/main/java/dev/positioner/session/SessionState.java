@@ -44,6 +44,11 @@ final class SessionState {
         return s;
     }
 
+    /** Each symptom reported and not retracted, present (true) or absent (false), in the order first reported. */
+    Map<String, Boolean> symptoms() {
+        return java.util.Collections.unmodifiableMap(new LinkedHashMap<>(symptoms));
+    }
+
     void apply(SessionEvent e) {
         EventData d = e.data();
         switch (e.type()) {

@@ -3,9 +3,11 @@ package dev.positioner.evaluation;
 import dev.positioner.asset.AssetDirectory;
 import dev.positioner.asset.DemoPlant;
 import dev.positioner.diagnosis.CataloguePriors;
+import dev.positioner.diagnosis.CatalogueSymptomRates;
 import dev.positioner.diagnosis.DiagnosisService;
 import dev.positioner.diagnosis.PriorSource;
 import dev.positioner.diagnosis.RuleEngine;
+import dev.positioner.diagnosis.SymptomRateSource;
 import dev.positioner.knowledge.KnowledgeBase;
 import dev.positioner.knowledge.KnowledgeBaseLoader;
 import java.io.IOException;
@@ -36,11 +38,21 @@ final class Evaluation {
         Properties config = config();
         stopThreshold = Double.parseDouble(setting(config, "positioner.stop-threshold", null));
         StringBuilder used = new StringBuilder();
-        service = build(kb, config, used);
+        service = build(kb, config, used, new CatalogueSymptomRates());
         settings = used.toString();
     }
 
-    private static DiagnosisService build(KnowledgeBase kb, Properties config, StringBuilder used) {
+    /** The same service with its symptom likelihoods from {@code rates}, e.g. learnt from other case sets. */
+    DiagnosisService withSymptomRates(SymptomRateSource rates) {
+        return build(kb, config(), new StringBuilder(), rates);
+    }
+
+    /** A setting as the service reads it, e.g. the weight of the catalogue when learning symptom likelihoods. */
+    static double setting(String name) {
+        return Double.parseDouble(setting(config(), name, null));
+    }
+
+    private static DiagnosisService build(KnowledgeBase kb, Properties config, StringBuilder used, SymptomRateSource rates) {
         Constructor<?> constructor = DiagnosisService.class.getConstructors()[0];
         Parameter[] parameters = constructor.getParameters();
         Object[] args = new Object[parameters.length];
@@ -55,6 +67,8 @@ final class Evaluation {
                 args[i] = new DemoPlant(true);
             } else if (type == PriorSource.class) {
                 args[i] = new CataloguePriors();
+            } else if (type == SymptomRateSource.class) {
+                args[i] = rates;
             } else if (property != null && (type == double.class || type == Double.class)) {
                 String fallback = ConfigProperty.UNCONFIGURED_VALUE.equals(property.defaultValue()) ? null : property.defaultValue();
                 args[i] = Double.parseDouble(setting(config, property.name(), fallback));

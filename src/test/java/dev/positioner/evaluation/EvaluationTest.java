@@ -39,6 +39,7 @@ class EvaluationTest {
     /** The fifth set written blind (see {@link CaseLibrary#HELD_OUT_5_DIR}). */
     static EvaluationReport heldOut5;
     static EvaluationReport report;
+    static List<LearntFromOtherSets.Row> learnt;
 
     @BeforeAll
     static void replayAllCases() throws IOException {
@@ -58,6 +59,9 @@ class EvaluationTest {
         }
         md.append(readingDisagreements(sets.subList(1, sets.size()))).append('\n');
         md.append(new ModelCeiling(evaluation.service, evaluation.kb.catalogue()).run().markdown());
+        learnt = LearntFromOtherSets.run(evaluation, sets);
+        md.append(LearntFromOtherSets.markdown(learnt, LearntFromOtherSets.inSample(evaluation, sets),
+                Evaluation.setting("positioner.learning.symptom-weight")));
         md.append(sets.stream().map(EvaluationReport::markdown).collect(Collectors.joining("\n")));
         Path out = Path.of("target", "evaluation-report.md");
         Files.createDirectories(out.getParent());

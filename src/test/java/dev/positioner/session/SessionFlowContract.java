@@ -203,6 +203,38 @@ abstract class SessionFlowContract {
                 "Confirmed 2 times on other valves of site site-" + tag + " in past closures; prior raised from 4.5 % to 6.4 %."));
     }
 
+    /**
+     * Closed jobs teach the site's symptom likelihoods: what each job reported present or absent when
+     * it was closed counts for its confirmed cause; a retracted report and a reopened job do not.
+     */
+    @Test
+    void aSitesClosedJobsTeachItsSymptomLikelihoods() {
+        String tag = newValve();
+        String oneShot = "{\"symptoms\": [\"slow_stroke\"], \"asset\": {\"tag\": \"" + tag + "\"}}";
+        JsonPath before = api().body(oneShot).post("/api/v1/diagnoses").then().statusCode(200).extract().jsonPath();
+        assertTrue(before.getList("assumptions", String.class).stream().noneMatch(a -> a.startsWith("Symptom likelihoods")),
+                before.getList("assumptions").toString());
+
+        for (int i = 0; i < 3; i++) {
+            String id = open(tag);
+            add(id, "symptoms", "{\"symptom\": \"noisy_pump\", \"present\": false, \"author\": \"night shift\"}").then().statusCode(201);
+            close(id, "supply_filter_clogged");
+        }
+        String reopened = open(tag);
+        close(reopened, "supply_filter_clogged");
+        add(reopened, "reopening", "{\"reason\": \"slow again the next day\", \"author\": \"day shift\"}").then().statusCode(201);
+
+        JsonPath after = api().body(oneShot).post("/api/v1/diagnoses").then().statusCode(200).extract().jsonPath();
+        assertTrue(after.getList("assumptions", String.class).contains("Symptom likelihoods: the catalogue's, each counted as 10 jobs,"
+                + " revised by the symptoms reported in 3 closed job(s) on site site-" + tag + " (Beta posterior mean)."),
+                after.getList("assumptions").toString());
+        // Reported in every job: slow stroke now weighs more for a loaded filter than the catalogue's 0.7 alone,
+        // (10 * 0.7 + 3) / 13 = 0.77, on top of the prior the same closures raised.
+        float learnt = after.getFloat("hypotheses.find { it.fault == 'supply_filter_clogged' }.probability");
+        float first = before.getFloat("hypotheses.find { it.fault == 'supply_filter_clogged' }.probability");
+        assertTrue(learnt > first, first + " -> " + learnt);
+    }
+
     @Test
     void aCheckThatNeedsABypassComesWithItsCautions() {
         // A valve that does not move at all leads, once the gauges cannot be read, to a check on the

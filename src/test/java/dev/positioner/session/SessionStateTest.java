@@ -55,4 +55,16 @@ class SessionStateTest {
         assertEquals("drain_pressure", state.request("X", drain).measurements().get(0).quantity());
         assertEquals("supply_pressure", state.request("X", null).measurements().get(0).quantity());
     }
+
+    /** What a closure records for learning: each symptom's last answer, retracted ones left out. */
+    @Test
+    void theSymptomsAClosureKeepsAreTheLastAnswersNotRetracted() {
+        add(EventType.OPENED, EventData.opened(null));
+        add(EventType.SYMPTOM, EventData.symptom("slow_stroke", true));
+        add(EventType.SYMPTOM, EventData.symptom("hunting", true));
+        add(EventType.RETRACTION, EventData.retraction(3, "it was the controller"));
+        add(EventType.SYMPTOM, EventData.symptom("noisy_pump", true));
+        add(EventType.SYMPTOM, EventData.symptom("noisy_pump", false));
+        assertEquals(Map.of("slow_stroke", true, "noisy_pump", false), SessionState.of(events).symptoms());
+    }
 }
