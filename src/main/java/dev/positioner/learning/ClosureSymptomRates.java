@@ -40,26 +40,25 @@ public class ClosureSymptomRates implements SymptomRateSource {
         String site = assets.find(asset.tag()).map(AssetRecord::site).orElse(null);
         LearntSymptomRates.Counts counts = new LearntSymptomRates.Counts();
         storage.read(c -> {
+            // One round trip: the reports per cause and symptom, and (the row with no fault) the number of jobs.
             try (PreparedStatement ps = c.prepareStatement("SELECT k.fault, s.symptom,"
                     + " SUM(CASE WHEN s.present THEN 1 ELSE 0 END), COUNT(*) FROM closure k"
                     + " JOIN closure_symptom s ON s.session_id = k.session_id AND s.seq = k.seq"
-                    + " WHERE k.reopened_at IS NULL AND k.site IS NOT DISTINCT FROM ? GROUP BY k.fault, s.symptom")) {
+                    + " WHERE k.reopened_at IS NULL AND k.site IS NOT DISTINCT FROM ? GROUP BY k.fault, s.symptom"
+                    + " UNION ALL SELECT CAST(NULL AS VARCHAR(64)), CAST(NULL AS VARCHAR(64)), COUNT(*), 0 FROM closure k"
+                    + " WHERE k.reopened_at IS NULL AND k.fault <> 'not_found' AND k.site IS NOT DISTINCT FROM ?"
+                    + " AND EXISTS (SELECT 1 FROM closure_symptom s WHERE s.session_id = k.session_id AND s.seq = k.seq)")) {
                 ps.setString(1, site);
+                ps.setString(2, site);
                 try (ResultSet rs = ps.executeQuery()) {
                     while (rs.next()) {
-                        if (catalogue.faults().containsKey(rs.getString(1))) {
-                            counts.add(rs.getString(2), rs.getString(1), rs.getInt(3), rs.getInt(4));
+                        String fault = rs.getString(1);
+                        if (fault == null) {
+                            counts.addJobs(rs.getInt(3));
+                        } else if (catalogue.faults().containsKey(fault)) {
+                            counts.add(rs.getString(2), fault, rs.getInt(3), rs.getInt(4));
                         }
                     }
-                }
-            }
-            try (PreparedStatement ps = c.prepareStatement("SELECT COUNT(*) FROM closure k WHERE k.reopened_at IS NULL"
-                    + " AND k.fault <> 'not_found' AND k.site IS NOT DISTINCT FROM ? AND EXISTS (SELECT 1 FROM closure_symptom s"
-                    + " WHERE s.session_id = k.session_id AND s.seq = k.seq)")) {
-                ps.setString(1, site);
-                try (ResultSet rs = ps.executeQuery()) {
-                    rs.next();
-                    counts.addJobs(rs.getInt(1));
                 }
             }
             return null;
