@@ -24,7 +24,16 @@ echo "startup_to_ready_ms=$ready"
 
 # Warm-up so the JIT has compiled the hot path before measuring.
 wrk -t2 -c8 -d10s -s src/bench/diagnosis-post.lua "http://127.0.0.1:$PORT/api/v1/diagnoses" >/dev/null
-echo "diagnosis:"; wrk -t2 -c16 -d${SECONDS_PER_RUN}s --latency -s src/bench/diagnosis-post.lua "http://127.0.0.1:$PORT/api/v1/diagnoses" | grep RESULT
+# Server CPU time (user + system, from /proc) per request: steadier than req/s on a shared machine,
+# where other tenants' load moves throughput but not much the work each request costs.
+cpu_ticks() { awk '{print $14 + $15}' /proc/$pid/stat; }
+before=$(cpu_ticks)
+out=$(wrk -t2 -c16 -d${SECONDS_PER_RUN}s --latency -s src/bench/diagnosis-post.lua "http://127.0.0.1:$PORT/api/v1/diagnoses" | grep RESULT)
+after=$(cpu_ticks)
+requests=$(sed 's/.*requests=\([0-9]*\).*/\1/' <<<"$out")
+echo "diagnosis:"; echo "$out"
+awk -v t=$((after - before)) -v hz="$(getconf CLK_TCK)" -v n="$requests" \
+  'BEGIN { printf "server_cpu_ms_per_request=%.3f\n", 1000 * t / hz / n }'
 echo "health:";    wrk -t2 -c16 -d${SECONDS_PER_RUN}s --latency -s src/bench/health-get.lua "http://127.0.0.1:$PORT/q/health/ready" | grep RESULT
 rss_kb=$(awk '/VmHWM/{print $2}' /proc/$pid/status)
 echo "server_peak_rss_mb=$((rss_kb / 1024))"

@@ -4,12 +4,14 @@ import java.util.Map;
 
 /**
  * Design data of the valve under diagnosis in canonical units, as given by the client or the
- * registry. Missing values are filled by {@link NormalBands} with stated assumptions.
+ * registry. Missing values are filled by {@link NormalBands} with stated assumptions. The site is
+ * the registry's (null when the tag has none or is not registered): learning from closures is by
+ * site, and carrying it here spares each learning source its own registry lookup.
  */
-public record AssetSpec(String tag, String oilGrade, String cleanlinessTarget, Map<String, Double> design) {
+public record AssetSpec(String tag, String site, String oilGrade, String cleanlinessTarget, Map<String, Double> design) {
 
     public static AssetSpec none() {
-        return new AssetSpec(null, null, null, Map.of());
+        return new AssetSpec(null, null, null, null, Map.of());
     }
 
     public Double value(String quantity) {

@@ -195,7 +195,7 @@ final class RequestReader {
         if (target != null && !validIso4406(target)) {
             errors.add(new FieldError("asset.cleanlinessTarget", "'" + target + "' is not an ISO 4406 code such as 16/14/11"));
         }
-        return new AssetSpec(input.tag(), grade, target, design);
+        return new AssetSpec(input.tag(), registered.map(AssetRecord::site).orElse(null), grade, target, design);
     }
 
     private void convertDesign(List<MeasurementInput> inputs, String prefix, Map<String, Double> design, boolean fromClient) {

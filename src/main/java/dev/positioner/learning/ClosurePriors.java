@@ -1,7 +1,5 @@
 package dev.positioner.learning;
 
-import dev.positioner.asset.AssetRecord;
-import dev.positioner.asset.AssetRegistry;
 import dev.positioner.diagnosis.AssetSpec;
 import dev.positioner.diagnosis.PriorSource;
 import dev.positioner.diagnosis.Priors;
@@ -24,15 +22,13 @@ import org.eclipse.microprofile.config.inject.ConfigProperty;
 public class ClosurePriors implements PriorSource {
 
     private final Storage storage;
-    private final AssetRegistry assets;
     private final double n0;
     private final double siteWeight;
 
-    public ClosurePriors(Storage storage, AssetRegistry assets,
+    public ClosurePriors(Storage storage,
             @ConfigProperty(name = "positioner.learning.catalogue-weight", defaultValue = "50") double n0,
             @ConfigProperty(name = "positioner.learning.site-weight", defaultValue = "0.5") double siteWeight) {
         this.storage = storage;
-        this.assets = assets;
         this.n0 = n0;
         this.siteWeight = siteWeight;
     }
@@ -44,7 +40,7 @@ public class ClosurePriors implements PriorSource {
         if (asset.tag() == null) {
             return new Priors(base, "Prior from the fault catalogue (no valve tag given, so no closure history applied).");
         }
-        String site = assets.find(asset.tag()).map(AssetRecord::site).orElse(null);
+        String site = asset.site();
         int[] tag = new int[base.length];
         int[] other = new int[base.length];
         count(hypotheses, asset.tag(), site, tag, other);

@@ -13,7 +13,7 @@ import java.util.Map;
 public final class CalculationBenchmark {
 
     public static void main(String[] args) {
-        AssetSpec asset = new AssetSpec("PV-2041", "VG46", "16/14/11", Map.of(
+        AssetSpec asset = new AssetSpec("PV-2041", null, "VG46", "16/14/11", Map.of(
                 "supply_pressure_nominal", 1.7237e6, "piston_bore", 0.2032, "rod_diameter", 0.04445,
                 "stroke_length", 0.1016, "pump_rated_flow", 1.2618e-4, "required_thrust", 40034.0,
                 "drain_line_length", 6.0, "drain_line_bore", 0.0127, "moving_mass", 180.0));

@@ -31,7 +31,7 @@ class RuleEngineTest {
 
     static RuleOutcome run(Object... facts) {
         List<Object> all = new ArrayList<>(List.of(facts));
-        all.addAll(NormalBands.facts(new AssetSpec("T", "VG46", "16/14/11", Map.of("design_stroke_time", 40.0))));
+        all.addAll(NormalBands.facts(new AssetSpec("T", null, "VG46", "16/14/11", Map.of("design_stroke_time", 40.0))));
         return engine.evaluate(all);
     }
 

@@ -15,7 +15,7 @@ import org.junit.jupiter.params.provider.CsvSource;
 class StrokeTimeBandTest {
 
     static double limit(Map<String, Double> design) {
-        return NormalBands.facts(new AssetSpec("T", "VG46", null, design)).stream()
+        return NormalBands.facts(new AssetSpec("T", null, "VG46", null, design)).stream()
                 .filter(f -> f instanceof Band b && b.quantity().equals("stroke_time_open"))
                 .mapToDouble(f -> ((Band) f).high()).findFirst().orElseThrow();
     }
