@@ -20,8 +20,19 @@ public record SymptomRates(Map<String, double[]> present, String basis) {
         double rate(String symptom, String fault, double catalogueValue);
     }
 
+    /** The last catalogue's own rates: the same for every request on one knowledge base, so built once. */
+    private static volatile Built lastBuilt;
+
+    private record Built(Catalogue of, SymptomRates rates) {
+    }
+
     public static SymptomRates catalogue(Catalogue catalogue) {
-        return revised(catalogue, (symptom, fault, p) -> p, null);
+        Built built = lastBuilt;
+        if (built == null || built.of() != catalogue) {
+            built = new Built(catalogue, revised(catalogue, (symptom, fault, p) -> p, null));
+            lastBuilt = built;
+        }
+        return built.rates();
     }
 
     /** The catalogue's values passed through {@code revision}; the unlisted cause keeps the catalogue's. */
