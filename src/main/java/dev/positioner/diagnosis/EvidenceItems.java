@@ -35,10 +35,10 @@ final class EvidenceItems {
             if (def == null || outcome.isSubsumed(s.code()) || outcome.explanation("symptom:" + s.code()).isPresent()) {
                 continue;
             }
+            double[] present = rates.present().get(s.code());
             double[] l = new double[hypotheses.size()];
             for (int h = 0; h < l.length; h++) {
-                double present = rates.present(s.code(), h);
-                l[h] = s.present() ? present : 1 - present;
+                l[h] = s.present() ? present[h] : 1 - present[h];
             }
             String derived = s.origin().equals("client") ? "" : " (from the readings)";
             items.add(new EvidenceItem((s.present() ? "Reported: " : "Reported absent: ") + def.text().toLowerCase() + derived, l));

@@ -5,6 +5,7 @@ import dev.positioner.diagnosis.DiagnosisRequest.AssetInput;
 import dev.positioner.diagnosis.DiagnosisRequest.CheckInput;
 import dev.positioner.diagnosis.DiagnosisRequest.MeasurementInput;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
@@ -46,7 +47,7 @@ final class SessionState {
 
     /** Each symptom reported and not retracted, present (true) or absent (false), in the order first reported. */
     Map<String, Boolean> symptoms() {
-        return java.util.Collections.unmodifiableMap(new LinkedHashMap<>(symptoms));
+        return Collections.unmodifiableMap(new LinkedHashMap<>(symptoms));
     }
 
     void apply(SessionEvent e) {
