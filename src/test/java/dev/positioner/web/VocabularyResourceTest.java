@@ -26,7 +26,7 @@ class VocabularyResourceTest {
                 .body("measurements.find { it.code == 'oil_temperature' }.kind", equalTo("temperature"))
                 .body("checks.find { it.code == 'read_filter_dp' }.outcomes", equalTo(java.util.List.of("normal", "high")))
                 .body("checks.find { it.code == 'read_filter_dp' }.bypassRequired", equalTo(false))
-                .body("checks.find { it.code == 'centering_pin_test' }.bypassRequired", equalTo(true))
+                .body("checks.find { it.code == 'pilot_null_alignment' }.bypassRequired", equalTo(true))
                 .body("faults.code", hasItems("pump_worn", "not_in_catalogue"))
                 .body("faults.find { it.code == 'pump_worn' }.failureMode", equalTo("LOO"));
     }
