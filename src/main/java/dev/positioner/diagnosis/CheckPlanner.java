@@ -13,8 +13,9 @@ import java.util.Set;
  * Chooses the next check by expected cost of repair with one-step look-ahead ({@link ExpectedCost}).
  * Only checks that could change the decision are candidates: some outcome, with a real chance of
  * happening, must change which cause leads or lift the leader to the stopping threshold. Among
- * them the lowest ECO wins; a check that needs a bypass costs its minutes plus a penalty for
- * running the process on manual.
+ * them the lowest ECO wins; a check costs its minutes plus the penalty of what it disturbs
+ * (disturbances.yaml: a moving valve, a process on manual, a shared hydraulic unit, an isolated
+ * process). A check whose result comes back after the job (a laboratory count) is not proposed.
  *
  * <p>The paper's own stopping rule (observe only while ECO is below ECR) is not used to stop: in
  * the case-library evaluation it ended sessions with the leader at 25-45 % whenever trying the
@@ -26,7 +27,6 @@ public final class CheckPlanner {
 
     private final Catalogue catalogue;
     private final double stopThreshold;
-    private final double bypassPenalty;
     private final double minimumChance;
 
     /**
@@ -34,10 +34,9 @@ public final class CheckPlanner {
      *        able to change the decision; without it, a check whose 1-in-200 outcome would reorder
      *        the list looks useful (modelling choice, configurable).
      */
-    public CheckPlanner(Catalogue catalogue, double stopThreshold, double bypassPenaltyMinutes, double minimumChance) {
+    public CheckPlanner(Catalogue catalogue, double stopThreshold, double minimumChance) {
         this.catalogue = catalogue;
         this.stopThreshold = stopThreshold;
-        this.bypassPenalty = bypassPenaltyMinutes;
         this.minimumChance = minimumChance;
     }
 
@@ -54,7 +53,7 @@ public final class CheckPlanner {
         double bestEco = Double.POSITIVE_INFINITY;
         List<String> blocked = new ArrayList<>();
         for (CheckDef check : catalogue.checks().values()) {
-            if (done.contains(check.code())) {
+            if (done.contains(check.code()) || check.resultLater()) {
                 continue;
             }
             double[][] table = Likelihoods.ofCheck(catalogue, check);
@@ -83,7 +82,11 @@ public final class CheckPlanner {
     }
 
     public double cost(CheckDef check) {
-        return check.minutes() + (check.bypass() ? bypassPenalty : 0);
+        return check.minutes() + penalty(check);
+    }
+
+    private double penalty(CheckDef check) {
+        return catalogue.penaltyMinutes(check.disturbs());
     }
 
     private boolean canChangeDecision(double[] p, int leader, double[][] table) {
@@ -125,7 +128,8 @@ public final class CheckPlanner {
                     after[k][lead] * 100));
         }
         text.append(String.format(Locale.ROOT, "Expected cost to finish: %.0f min with this check first, %.0f min acting on the causes in order now", eco, ecrNow));
-        text.append(check.bypass() ? String.format(Locale.ROOT, " (the check counts %.0f min extra for the bypass).", bypassPenalty) : ".");
+        double penalty = penalty(check);
+        text.append(penalty > 0 ? String.format(Locale.ROOT, " (the check counts %.0f min extra for what it disturbs).", penalty) : ".");
         if (eco >= ecrNow) {
             Fault first = hypotheses.get(ExpectedCost.order(p, repair)[0]);
             text.append(String.format(Locale.ROOT, " By expected cost alone, trying the repair for %s (%.0f min) first would be as cheap; "

@@ -47,7 +47,6 @@ public class DiagnosisService {
     public DiagnosisService(KnowledgeBase knowledge, RuleEngine engine, AssetDirectory assets, PriorSource priorSource,
             SymptomRateSource rateSource,
             @ConfigProperty(name = "positioner.stop-threshold") double stopThreshold,
-            @ConfigProperty(name = "positioner.bypass-penalty-minutes") double bypassPenalty,
             @ConfigProperty(name = "positioner.minimum-outcome-chance") double minimumChance) {
         this.catalogue = knowledge.catalogue();
         this.engine = engine;
@@ -55,7 +54,7 @@ public class DiagnosisService {
         this.priorSource = priorSource;
         this.rateSource = rateSource;
         this.stopThreshold = stopThreshold;
-        this.planner = new CheckPlanner(catalogue, stopThreshold, bypassPenalty, minimumChance);
+        this.planner = new CheckPlanner(catalogue, stopThreshold, minimumChance);
     }
 
     /** Optional: without a trace store (a service built outside the container) traces cannot be referenced. */

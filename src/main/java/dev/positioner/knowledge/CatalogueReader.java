@@ -34,11 +34,19 @@ final class CatalogueReader {
 
     Catalogue read() {
         YamlNode faultsDoc = open("faults.yaml");
+        YamlNode repairsDoc = open("repairs.yaml");
+        Map<String, YamlNode> repairNodes = repairsDoc.get("repairs").map();
         Map<String, Fault> faults = new LinkedHashMap<>();
-        faultsDoc.get("faults").map().forEach((code, n) -> faults.put(code, fault(code, n.withEntry(code))));
+        faultsDoc.get("faults").map().forEach((code, n) -> faults.put(code, fault(code, n.withEntry(code), repairNodes)));
         YamlNode unlistedNode = faultsDoc.require("unlisted").withEntry("unlisted");
-        Fault unlisted = fault(unlistedNode.require("code").text(), unlistedNode);
+        Fault unlisted = fault(unlistedNode.require("code").text(), unlistedNode, repairNodes);
         double unlistedSymptom = unlistedNode.require("symptomPresent").number();
+        repairNodes.forEach((code, n) -> lines.put("repairs.yaml/" + code, n.line()));
+        repairNodes.keySet().stream().filter(code -> !faults.containsKey(code) && !code.equals(unlisted.code()))
+                .forEach(code -> problem("repairs.yaml", repairNodes.get(code).line(), code,
+                        "repair for a fault that is not in faults.yaml"));
+        YamlNode common = repairsDoc.get("afterEveryRepair");
+        RepairGuide guide = new RepairGuide(common.require("returnToService").texts(), common.require("ifNotTonight").texts());
 
         Map<String, SymptomDef> symptoms = new LinkedHashMap<>();
         open("symptoms.yaml").get("symptoms").map().forEach((code, n) -> symptoms.put(code, symptom(code, n)));
@@ -47,9 +55,11 @@ final class CatalogueReader {
 
         Map<String, String> cautions = texts(open("cautions.yaml").get("cautions"));
         Map<String, String> sources = texts(open("sources.yaml").get("sources"));
+        Map<String, Disturbance> disturbances = new LinkedHashMap<>();
+        open("disturbances.yaml").get("disturbances").map().forEach((code, n) -> disturbances.put(code, disturbance(code, n.withEntry(code))));
         YamlNode quantities = open("quantities.yaml");
         return new Catalogue(faults, unlisted, unlistedSymptom, symptoms, checks, cautions, sources,
-                quantities(quantities.get("measurements")), quantities(quantities.get("design")));
+                quantities(quantities.get("measurements")), quantities(quantities.get("design")), disturbances, guide);
     }
 
     /** Line of each entry, keyed like {@code checks.yaml/read_filter_dp/pump_worn}, for the validator. */
@@ -57,11 +67,34 @@ final class CatalogueReader {
         return lines;
     }
 
-    private Fault fault(String code, YamlNode n) {
+    private Fault fault(String code, YamlNode n, Map<String, YamlNode> repairs) {
         lines.put("faults.yaml/" + code, n.line());
+        YamlNode r = repairs.get(code);
+        Repair repair;
+        if (r == null) {
+            problem("repairs.yaml", 0, code, "no repair entry for this fault (every fault needs one)");
+            repair = Repair.minimal(code, "", Double.NaN, List.of());
+        } else {
+            repair = repair(code, r.withEntry(code));
+        }
         return new Fault(code, n.require("title").text(), n.get("group").text(), n.require("prior").number(),
                 n.require("failureMode").text(), n.require("mechanism").text(), n.get("cause").text(),
-                n.require("repairMinutes").number(), n.require("action").text(), n.require("source").texts());
+                n.require("source").texts(), repair);
+    }
+
+    private static Repair repair(String fault, YamlNode n) {
+        return new Repair(fault, n.require("action").text(), n.require("minutes").number(),
+                n.get("partsCost").isMissing() ? 0 : n.get("partsCost").number(),
+                n.get("reversible").isMissing() || n.get("reversible").bool(),
+                n.require("fixChance").number(), n.require("disturbs").oneOrMoreTexts(), n.get("tools").texts(),
+                n.get("spares").texts(), n.get("steps").texts(), n.get("adjustments").texts(), n.get("cautions").texts(),
+                n.get("returnToService").texts(), n.get("ifNotTonight").texts(), n.require("source").texts());
+    }
+
+    private Disturbance disturbance(String code, YamlNode n) {
+        lines.put("disturbances.yaml/" + code, n.line());
+        return new Disturbance(code, n.require("title").text(), n.require("penaltyMinutes").number(),
+                n.require("bypass").bool(), n.get("cautions").texts(), n.require("source").texts());
     }
 
     private SymptomDef symptom(String code, YamlNode n) {
@@ -86,7 +119,8 @@ final class CatalogueReader {
         return new CheckDef(code, n.require("title").text(), n.require("minutes").number(),
                 n.get("bypass").isMissing() ? false : n.get("bypass").bool(), n.require("outcomes").texts(),
                 n.require("instructions").texts(), n.get("cautions").texts(),
-                distribution(n.require("otherwise")), given, n.require("source").texts());
+                distribution(n.require("otherwise")), given, n.require("source").texts(), n.require("disturbs").oneOrMoreTexts(),
+                n.get("resultAfterHours").isMissing() ? 0 : n.get("resultAfterHours").number());
     }
 
     private static Map<String, Double> distribution(YamlNode row) {

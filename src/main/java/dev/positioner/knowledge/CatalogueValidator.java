@@ -25,8 +25,11 @@ final class CatalogueValidator {
             "FTI", "FTO", "FTS", "HIO", "INL", "LBP", "LCP", "LOO", "NOI", "NOO", "OHE", "OTH", "PDE", "PLU",
             "SER", "SPO", "STD", "STP", "UNK", "VIB");
 
-    /** Cautions every check that needs a bypass must carry (see DESIGN safety section). */
+    /** Cautions every step that needs a bypass must carry (see DESIGN safety section). */
     static final List<String> BYPASS_CAUTIONS = List.of("operator_permission", "fail_position", "process_upset");
+
+    /** The class of steps that disturb nothing; every other class moves something and needs permission. */
+    static final String UNDISTURBED = "nothing";
 
     private final Catalogue catalogue;
     private final Map<String, Integer> lines;
@@ -39,6 +42,7 @@ final class CatalogueValidator {
 
     List<KnowledgeProblem> validate(BaseVocabulary base) {
         checkBase(base);
+        catalogue.disturbances().values().forEach(this::checkDisturbance);
         checkFaults();
         catalogue.symptoms().values().forEach(this::checkSymptom);
         catalogue.checks().values().forEach(this::checkCheck);
@@ -81,9 +85,7 @@ final class CatalogueValidator {
             if (fault != catalogue.unlisted()) {
                 sum += fault.prior();
             }
-            if (!(fault.repairMinutes() > 0)) {
-                add("faults.yaml", key, "repairMinutes must be a positive number of minutes");
-            }
+            checkRepair(fault.code(), fault.repair());
             if (!ISO14224_MODES.contains(fault.failureMode())) {
                 add("faults.yaml", key, "failureMode '" + fault.failureMode() + "' is not an ISO 14224 code we know");
             }
@@ -124,10 +126,70 @@ final class CatalogueValidator {
             BYPASS_CAUTIONS.stream().filter(c -> !check.cautions().contains(c))
                     .forEach(c -> add("checks.yaml", key, "a check that needs a bypass must carry caution '" + c + "'"));
         }
+        disturbs("checks.yaml", key, "check", check.disturbs(), check.cautions());
+        boolean classBypass = check.disturbs().stream().map(catalogue::disturbance)
+                .anyMatch(d -> d != null && d.bypass());
+        if (classBypass != check.bypass()) {
+            add("checks.yaml", key, "bypass: " + check.bypass() + " disagrees with what it disturbs " + check.disturbs()
+                    + " (a bypass or out-of-service class means bypass: true); change one of them");
+        }
+        if (!(check.resultAfterHours() >= 0)) {
+            add("checks.yaml", key, "resultAfterHours must be zero or a positive number of hours");
+        }
         if (check.instructions().isEmpty()) {
             add("checks.yaml", key, "instructions are missing");
         }
         sources("checks.yaml", key, check.sources());
+    }
+
+    private void checkDisturbance(Disturbance d) {
+        if (!(d.penaltyMinutes() >= 0)) {
+            add("disturbances.yaml", d.code(), "penaltyMinutes must be zero or positive");
+        }
+        d.cautions().stream().filter(c -> !catalogue.cautions().containsKey(c))
+                .forEach(c -> add("disturbances.yaml", d.code(), "unknown caution code '" + c + "'"));
+        if (!d.code().equals(UNDISTURBED) && !d.cautions().contains("operator_permission")) {
+            add("disturbances.yaml", d.code(), "a class that disturbs anything must carry caution 'operator_permission'");
+        }
+        if (d.bypass()) {
+            BYPASS_CAUTIONS.stream().filter(c -> !d.cautions().contains(c))
+                    .forEach(c -> add("disturbances.yaml", d.code(), "a bypass class must carry caution '" + c + "'"));
+        }
+        sources("disturbances.yaml", d.code(), d.sources());
+    }
+
+    private void disturbs(String file, String key, String what, List<String> classes, List<String> cautions) {
+        if (classes.isEmpty()) {
+            add(file, key, "disturbs is missing: name a class of disturbances.yaml " + catalogue.disturbances().keySet());
+        }
+        for (String code : classes) {
+            Disturbance d = catalogue.disturbance(code);
+            if (d == null) {
+                add(file, key, "disturbs '" + code + "' is not a class of disturbances.yaml " + catalogue.disturbances().keySet());
+                continue;
+            }
+            d.cautions().stream().filter(c -> !cautions.contains(c))
+                    .forEach(c -> add(file, key, "a " + what + " that disturbs '" + d.code() + "' must carry caution '" + c + "'"));
+        }
+    }
+
+    private void checkRepair(String fault, Repair r) {
+        if (!(r.minutes() > 0)) {
+            add("repairs.yaml", fault, "minutes must be a positive number of minutes");
+        }
+        if (!(r.fixChance() > 0 && r.fixChance() <= 1)) {
+            add("repairs.yaml", fault, "fixChance = " + r.fixChance() + " must lie in (0, 1]");
+        }
+        if (!(r.partsCost() >= 0)) {
+            add("repairs.yaml", fault, "partsCost must be zero or positive");
+        }
+        if (r.action().isBlank()) {
+            add("repairs.yaml", fault, "action is missing");
+        }
+        disturbs("repairs.yaml", fault, "repair", r.disturbs(), r.cautions());
+        r.cautions().stream().filter(c -> !catalogue.cautions().containsKey(c))
+                .forEach(c -> add("repairs.yaml", fault, "unknown caution code '" + c + "'"));
+        sources("repairs.yaml", fault, r.sources());
     }
 
     private void distribution(CheckDef check, String key, String row, Map<String, Double> dist) {

@@ -120,6 +120,11 @@ final class YamlNode {
         return out;
     }
 
+    /** A list of texts, or a single text written without brackets. */
+    List<String> oneOrMoreTexts() {
+        return node instanceof ScalarNode ? List.of(text()) : texts();
+    }
+
     List<String> texts() {
         return list().stream().map(YamlNode::text).toList();
     }

@@ -2,7 +2,10 @@ package dev.positioner.diagnosis;
 
 import dev.positioner.knowledge.Catalogue;
 import dev.positioner.knowledge.CheckDef;
+import dev.positioner.knowledge.Disturbance;
 import dev.positioner.knowledge.Fault;
+import dev.positioner.knowledge.Repair;
+import dev.positioner.knowledge.RepairGuide;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -14,7 +17,8 @@ final class TinyCatalogue {
     }
 
     static Fault fault(String code, double prior, double repair) {
-        return new Fault(code, code, "test", prior, "OTH", "6.4 Unknown", "", repair, "repair " + code, List.of("from_memory"));
+        return new Fault(code, code, "test", prior, "OTH", "6.4 Unknown", "", List.of("from_memory"),
+                Repair.minimal(code, "repair " + code, repair, List.of("from_memory")));
     }
 
     /** P(a | f0), P(a | f1); the unlisted cause takes the prior-weighted mean. */
@@ -22,10 +26,14 @@ final class TinyCatalogue {
         return new CheckDef(code, code, minutes, bypass, List.of("a", "b"), List.of("do it"), List.of(),
                 Map.of("a", 0.5, "b", 0.5),
                 Map.of("f0", Map.of("a", aGivenF0, "b", 1 - aGivenF0), "f1", Map.of("a", aGivenF1, "b", 1 - aGivenF1)),
-                List.of("from_memory"));
+                List.of("from_memory"), List.of(bypass ? "positioner_bypassed" : "nothing"), 0);
     }
 
     static Catalogue of(CheckDef... checks) {
+        return withBypassPenalty(30, checks);
+    }
+
+    static Catalogue withBypassPenalty(double penalty, CheckDef... checks) {
         Map<String, Fault> faults = new LinkedHashMap<>();
         faults.put("f0", fault("f0", 0.594, 100));
         faults.put("f1", fault("f1", 0.396, 80));
@@ -33,7 +41,10 @@ final class TinyCatalogue {
         for (CheckDef c : checks) {
             byCode.put(c.code(), c);
         }
+        Map<String, Disturbance> disturbances = Map.of(
+                "nothing", new Disturbance("nothing", "nothing", 0, false, List.of(), List.of("common_practice")),
+                "positioner_bypassed", new Disturbance("positioner_bypassed", "Bypassed", penalty, true, List.of(), List.of("common_practice")));
         return new Catalogue(faults, fault("not_in_catalogue", 0.01, 240), 0.15, Map.of(), byCode, Map.of(),
-                Map.of(), Map.of(), Map.of());
+                Map.of(), Map.of(), Map.of(), disturbances, RepairGuide.empty());
     }
 }
