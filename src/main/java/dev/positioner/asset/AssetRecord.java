@@ -10,9 +10,15 @@ import java.util.List;
  */
 @JsonInclude(JsonInclude.Include.NON_NULL)
 public record AssetRecord(String tag, String description, String area, String site, String oilGrade,
-        String cleanlinessTarget, List<MeasurementInput> design) {
+        String cleanlinessTarget, List<MeasurementInput> design, String action, String failPosition,
+        Boolean returnSpring) {
 
     public AssetRecord {
         design = design == null ? List.of() : List.copyOf(design);
+    }
+
+    public AssetRecord(String tag, String description, String area, String site, String oilGrade,
+            String cleanlinessTarget, List<MeasurementInput> design) {
+        this(tag, description, area, site, oilGrade, cleanlinessTarget, design, null, null, null);
     }
 }

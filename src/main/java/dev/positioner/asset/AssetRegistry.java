@@ -25,7 +25,8 @@ import java.util.Optional;
 @ApplicationScoped
 public class AssetRegistry implements AssetDirectory {
 
-    private static final String COLUMNS = "tag, description, area, site, oil_grade, cleanliness_target, design";
+    private static final String COLUMNS = "tag, description, area, site, oil_grade, cleanliness_target, design,"
+            + " valve_action, fail_position, return_spring";
 
     private final Storage storage;
     private final ObjectMapper json;
@@ -76,10 +77,10 @@ public class AssetRegistry implements AssetDirectory {
         }
         Timestamp now = Timestamp.from(Instant.now());
         try (PreparedStatement ps = c.prepareStatement("INSERT INTO asset (" + COLUMNS
-                + ", created_at, updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
+                + ", created_at, updated_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)")) {
             bind(ps, a);
-            ps.setTimestamp(8, now);
-            ps.setTimestamp(9, now);
+            ps.setTimestamp(11, now);
+            ps.setTimestamp(12, now);
             ps.executeUpdate();
             return true;
         }
@@ -88,10 +89,11 @@ public class AssetRegistry implements AssetDirectory {
     /** Replaces a valve's data; false if the tag is not registered. */
     public boolean update(Connection c, AssetRecord a) throws SQLException {
         try (PreparedStatement ps = c.prepareStatement("UPDATE asset SET tag = ?, description = ?, area = ?, site = ?,"
-                + " oil_grade = ?, cleanliness_target = ?, design = ?, updated_at = ? WHERE tag = ?")) {
+                + " oil_grade = ?, cleanliness_target = ?, design = ?, valve_action = ?, fail_position = ?,"
+                + " return_spring = ?, updated_at = ? WHERE tag = ?")) {
             bind(ps, a);
-            ps.setTimestamp(8, Timestamp.from(Instant.now()));
-            ps.setString(9, a.tag());
+            ps.setTimestamp(11, Timestamp.from(Instant.now()));
+            ps.setString(12, a.tag());
             return ps.executeUpdate() == 1;
         }
     }
@@ -108,14 +110,23 @@ public class AssetRegistry implements AssetDirectory {
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("design data cannot be written as JSON", e);
         }
+        ps.setString(8, a.action());
+        ps.setString(9, a.failPosition());
+        if (a.returnSpring() == null) {
+            ps.setNull(10, java.sql.Types.BOOLEAN);
+        } else {
+            ps.setBoolean(10, a.returnSpring());
+        }
     }
 
     private List<AssetRecord> list(PreparedStatement ps) throws SQLException {
         List<AssetRecord> out = new ArrayList<>();
         try (ResultSet rs = ps.executeQuery()) {
             while (rs.next()) {
+                boolean spring = rs.getBoolean(10);
                 out.add(new AssetRecord(rs.getString(1), rs.getString(2), rs.getString(3), rs.getString(4),
-                        rs.getString(5), rs.getString(6), design(rs.getString(7))));
+                        rs.getString(5), rs.getString(6), design(rs.getString(7)), rs.getString(8), rs.getString(9),
+                        rs.wasNull() ? null : spring));
             }
         }
         return out;

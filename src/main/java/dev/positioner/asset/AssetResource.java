@@ -85,7 +85,7 @@ public class AssetResource {
             throw new InvalidRequestException("tag", "'" + body.tag() + "' differs from the tag in the path, '" + tag + "'");
         }
         AssetRecord asset = valid(body == null ? null : new AssetRecord(tag, body.description(), body.area(), body.site(),
-                body.oilGrade(), body.cleanlinessTarget(), body.design()));
+                body.oilGrade(), body.cleanlinessTarget(), body.design(), body.action(), body.failPosition(), body.returnSpring()));
         boolean created = storage.inTransaction(c -> !registry.update(c, asset) && registry.create(c, asset));
         return Response.status(created ? 201 : 200).entity(asset).build();
     }

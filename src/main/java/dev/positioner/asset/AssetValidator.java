@@ -2,6 +2,7 @@ package dev.positioner.asset;
 
 import dev.positioner.api.FieldError;
 import dev.positioner.diagnosis.DiagnosisRequest.MeasurementInput;
+import dev.positioner.diagnosis.facts.ValveAction;
 import dev.positioner.hydraulics.Iso4406;
 import dev.positioner.hydraulics.IsoVgGrade;
 import dev.positioner.knowledge.KnowledgeBase;
@@ -63,8 +64,16 @@ public class AssetValidator {
             }
         }
         design(a.design(), prefix + "design", errors);
+        String action = blankToNull(a.action());
+        if (action != null && !ValveAction.ACTIONS.contains(action)) {
+            errors.add(new FieldError(prefix + "action", "'" + action + "' is not one of " + ValveAction.ACTIONS));
+        }
+        String fail = blankToNull(a.failPosition());
+        if (fail != null && !ValveAction.FAIL_POSITIONS.contains(fail)) {
+            errors.add(new FieldError(prefix + "failPosition", "'" + fail + "' is not one of " + ValveAction.FAIL_POSITIONS));
+        }
         AssetRecord clean = new AssetRecord(a.tag(), blankToNull(a.description()), blankToNull(a.area()),
-                blankToNull(a.site()), grade, target, a.design());
+                blankToNull(a.site()), grade, target, a.design(), action, fail, a.returnSpring());
         return new Result(clean, errors);
     }
 

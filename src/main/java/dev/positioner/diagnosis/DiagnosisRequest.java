@@ -22,6 +22,15 @@ public record DiagnosisRequest(List<String> symptoms, List<String> absentSymptom
     public record CheckInput(String check, String outcome) {
     }
 
-    public record AssetInput(String tag, String oilGrade, String cleanlinessTarget, List<MeasurementInput> design) {
+    /**
+     * {@code action}: increase_opens or increase_closes; {@code failPosition}: open, closed or
+     * in_place; {@code returnSpring}: whether a spring returns the piston. All optional.
+     */
+    public record AssetInput(String tag, String oilGrade, String cleanlinessTarget, List<MeasurementInput> design,
+            String action, String failPosition, Boolean returnSpring) {
+
+        public AssetInput(String tag, String oilGrade, String cleanlinessTarget, List<MeasurementInput> design) {
+            this(tag, oilGrade, cleanlinessTarget, design, null, null, null);
+        }
     }
 }

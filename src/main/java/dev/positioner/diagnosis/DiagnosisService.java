@@ -70,6 +70,7 @@ public class DiagnosisService {
         facts.addAll(input.assumptions());
         facts.addAll(input.traceFacts());
         facts.addAll(NormalBands.facts(input.asset()));
+        facts.add(input.asset().action());
         Map<String, Reading> readings = input.readings().stream().collect(Collectors.toMap(Reading::quantity, Function.identity()));
         facts.addAll(EngineeringFindings.facts(input.asset(), readings));
         RuleOutcome outcome = engine.evaluate(facts);

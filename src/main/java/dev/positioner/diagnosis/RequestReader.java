@@ -8,6 +8,7 @@ import dev.positioner.diagnosis.DiagnosisRequest.AssetInput;
 import dev.positioner.diagnosis.DiagnosisRequest.CheckInput;
 import dev.positioner.diagnosis.DiagnosisRequest.MeasurementInput;
 import dev.positioner.diagnosis.facts.Assumption;
+import dev.positioner.diagnosis.facts.ValveAction;
 import dev.positioner.diagnosis.facts.Finding;
 import dev.positioner.diagnosis.facts.Observation;
 import dev.positioner.diagnosis.facts.TraceVerdict;
@@ -195,7 +196,17 @@ final class RequestReader {
         if (target != null && !validIso4406(target)) {
             errors.add(new FieldError("asset.cleanlinessTarget", "'" + target + "' is not an ISO 4406 code such as 16/14/11"));
         }
-        return new AssetSpec(input.tag(), registered.map(AssetRecord::site).orElse(null), grade, target, design);
+        String action = input.action() != null ? input.action() : registered.map(AssetRecord::action).orElse(null);
+        String fail = input.failPosition() != null ? input.failPosition() : registered.map(AssetRecord::failPosition).orElse(null);
+        Boolean spring = input.returnSpring() != null ? input.returnSpring() : registered.map(AssetRecord::returnSpring).orElse(null);
+        if (action != null && !ValveAction.ACTIONS.contains(action)) {
+            errors.add(new FieldError("asset.action", "'" + action + "' is not one of " + ValveAction.ACTIONS));
+        }
+        if (fail != null && !ValveAction.FAIL_POSITIONS.contains(fail)) {
+            errors.add(new FieldError("asset.failPosition", "'" + fail + "' is not one of " + ValveAction.FAIL_POSITIONS));
+        }
+        return new AssetSpec(input.tag(), registered.map(AssetRecord::site).orElse(null), grade, target, design,
+                ValveAction.of(action, fail, spring));
     }
 
     private void convertDesign(List<MeasurementInput> inputs, String prefix, Map<String, Double> design, boolean fromClient) {

@@ -9,6 +9,7 @@ import dev.positioner.diagnosis.facts.Explained;
 import dev.positioner.diagnosis.facts.Observation;
 import dev.positioner.diagnosis.facts.Reading;
 import dev.positioner.diagnosis.facts.ReportedSymptom;
+import dev.positioner.diagnosis.facts.ValveAction;
 import dev.positioner.knowledge.KnowledgeBase;
 import dev.positioner.knowledge.KnowledgeBaseLoader;
 import java.nio.file.Path;
@@ -30,9 +31,19 @@ class RuleEngineTest {
     }
 
     static RuleOutcome run(Object... facts) {
+        return runOn(new AssetSpec("T", null, "VG46", "16/14/11", Map.of("design_stroke_time", 40.0)), facts);
+    }
+
+    static RuleOutcome runOn(AssetSpec asset, Object... facts) {
         List<Object> all = new ArrayList<>(List.of(facts));
-        all.addAll(NormalBands.facts(new AssetSpec("T", null, "VG46", "16/14/11", Map.of("design_stroke_time", 40.0))));
+        all.addAll(NormalBands.facts(asset));
+        all.add(asset.action());
         return engine.evaluate(all);
+    }
+
+    static AssetSpec acting(String action, String failPosition, Boolean spring) {
+        return new AssetSpec("T", null, "VG46", "16/14/11", Map.of("design_stroke_time", 40.0),
+                ValveAction.of(action, failPosition, spring));
     }
 
     static Reading reading(String q, double canonical, String unit) {
@@ -181,6 +192,43 @@ class RuleEngineTest {
         RuleOutcome span = run(reading("input_signal", 95, "percent"), reading("stem_position", 100, "percent"));
         assertFalse(span.firedRules().contains("INT-POS-06"), span.firedRules().toString());
         assertTrue(span.firedRules().contains("INT-POS-04"), span.firedRules().toString());
+    }
+
+    @Test
+    void aReverseActingValveFullyOpenAtZeroSignalIsWhereItShouldBe() {
+        // Rising signal closes this valve: at 0 % signal it belongs at 100 % open. Nothing to see.
+        RuleOutcome o = runOn(acting("increase_closes", "open", true), reading("input_signal", 0, "percent"),
+                reading("stem_position", 100, "percent"));
+        assertTrue(o.firedRules().contains("INT-POS-00"), o.firedRules().toString());
+        assertFalse(o.firedRules().contains("INT-POS-06"), o.firedRules().toString());
+        assertFalse(o.firedRules().contains("INT-POS-01"), o.firedRules().toString());
+        assertFalse(o.firedRules().contains("INT-POS-09"), "the action is stated, nothing is assumed");
+        assertTrue(o.symptoms().stream().noneMatch(sy -> sy.code().equals("wrong_direction") || sy.code().equals("position_offset")));
+        // The same valve shut at 0 % signal has run away from where its signal puts it.
+        RuleOutcome shut = runOn(acting("increase_closes", "open", true), reading("input_signal", 0, "percent"),
+                reading("stem_position", 0, "percent"));
+        assertTrue(shut.firedRules().contains("INT-POS-06"), shut.firedRules().toString());
+        assertFalse(shut.firedRules().contains("INT-POS-08"), "shut is not this valve's fail position");
+    }
+
+    @Test
+    void aRunawayToTheFailPositionIsNamedAsSuch() {
+        // Spring to close, 50 % signal, stem shut: where loss of supply or a dumping trip valve leaves it.
+        RuleOutcome o = runOn(acting("increase_opens", "closed", true), reading("input_signal", 50, "percent"),
+                reading("stem_position", 0, "percent"));
+        assertTrue(o.firedRules().containsAll(List.of("INT-POS-06", "INT-POS-08")), o.firedRules().toString());
+        assertTrue(o.findings().stream().anyMatch(f -> f.code().equals("at_fail_position")));
+        // Driven fully open instead, away from its fail position: a runaway, but not to the fail position.
+        RuleOutcome open = runOn(acting("increase_opens", "closed", true), reading("input_signal", 50, "percent"),
+                reading("stem_position", 100, "percent"));
+        assertTrue(open.firedRules().contains("INT-POS-06"));
+        assertFalse(open.firedRules().contains("INT-POS-08"), open.firedRules().toString());
+    }
+
+    @Test
+    void theDirectActionIsSaidToBeAssumedWhenTheDesignDataIsSilent() {
+        RuleOutcome o = run(reading("input_signal", 50, "percent"), reading("stem_position", 50, "percent"));
+        assertTrue(o.firedRules().contains("INT-POS-09"), o.firedRules().toString());
     }
 
     @Test

@@ -52,13 +52,13 @@ public final class Say {
                 fmt(deviation)), deviation, "percent", "within ±2 % of span");
     }
 
-    public static Finding positionError(Reading input, Reading position) {
-        double error = position.value() - input.value();
+    public static Finding positionError(Reading input, Reading position, double expected) {
+        double error = position.value() - expected;
         return new Finding("position_error", String.format(Locale.ROOT,
                 ("commanded_signal".equals(input.quantity()) ? "With the controller sending %s" : "With %s at the positioner")
-                        + " the stem sits at %s: %s %% of travel off (more than 2 %% counts).",
-                show(input.givenValue(), input.givenUnit()), show(position.givenValue(), position.givenUnit()), fmt(error)),
-                error, "percent", "within ±2 % of travel");
+                        + " the stem should sit at %s %% open and sits at %s: %s %% of travel off (more than 2 %% counts).",
+                show(input.givenValue(), input.givenUnit()), fmt(expected), show(position.givenValue(), position.givenUnit()),
+                fmt(error)), error, "percent", "within ±2 % of travel");
     }
 
     /** The band in the technician's unit; an open side is written as "at most" / "at least". */
