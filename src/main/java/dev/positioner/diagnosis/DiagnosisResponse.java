@@ -5,14 +5,16 @@ import java.util.List;
 
 /** The one-shot response; field names are the contract's (see openapi/openapi.yaml). */
 public record DiagnosisResponse(List<HypothesisView> hypotheses, NextCheckView nextCheck, List<FindingView> findings,
-        List<String> cautions, List<String> assumptions, DecisionView decision) {
+        List<String> cautions, List<String> assumptions, DecisionView decision, List<String> alerts) {
 
     public record HypothesisView(String fault, String title, double probability, String failureMode,
             String mechanism, String action, List<String> reasons) {
     }
 
+    /** {@code disturbs}: codes of what the check disturbs (disturbances.yaml); {@code persons}: people it needs. */
     public record NextCheckView(String check, String title, double minutes, List<String> outcomes,
-            boolean bypassRequired, List<String> instructions, List<String> cautions, String why) {
+            boolean bypassRequired, List<String> instructions, List<String> cautions, String why,
+            List<String> disturbs, int persons) {
     }
 
     @JsonInclude(JsonInclude.Include.NON_NULL)

@@ -34,6 +34,9 @@ import org.eclipse.microprofile.config.inject.ConfigProperty;
 @ApplicationScoped
 public class DiagnosisService {
 
+    /** Shown with any check that needs a second person (the loader makes sure the catalogue has it). */
+    static final String LONE_WORKING = "lone_working";
+
     static final String METHOD = "Expected cost of repair with one-step look-ahead (Heckerman, Breese and Rommelse, CACM 1995)";
 
     private final Catalogue catalogue;
@@ -83,14 +86,27 @@ public class DiagnosisService {
         double[] posterior = Bayes.posterior(prior, items.stream().map(EvidenceItem::likelihood).toList());
 
         Set<String> done = outcome.observations().stream().map(Observation::check).collect(Collectors.toSet());
-        CheckPlan plan = planner.plan(posterior, done, input.unavailableChecks());
+        CheckPlan plan = planner.plan(posterior, done, unavailable(input.unavailableChecks(), outcome));
         return new DiagnosisResponse(rank(hypotheses, prior, posterior, items, priors.notes()), nextCheck(plan),
                 outcome.findings().stream().map(f -> new FindingView(f.code(), f.text(),
                         Double.isNaN(f.value()) ? null : f.value(), f.unit(), f.limit())).toList(),
                 cautions(outcome, plan), assumptions(outcome, priors, rates),
                 new DecisionView(METHOD, stopThreshold, plan.expectedCostNow(),
                         Double.isNaN(plan.expectedCostWithCheck()) ? null : plan.expectedCostWithCheck(),
-                        plan.stopReason(), List.copyOf(outcome.firedRules())));
+                        plan.stopReason(), List.copyOf(outcome.firedRules())),
+                outcome.alerts().stream().map(a -> catalogue.alerts().get(a.code())).distinct().toList());
+    }
+
+    /** What the technician cannot do, and what the situation holds back (a rule's Hold on a class of disturbance). */
+    private Set<String> unavailable(Set<String> marked, RuleOutcome outcome) {
+        if (outcome.holds().isEmpty()) {
+            return marked;
+        }
+        Set<String> held = outcome.holds().stream().map(h -> h.disturbance()).collect(Collectors.toSet());
+        Set<String> out = new java.util.HashSet<>(marked);
+        catalogue.checks().values().stream().filter(c -> c.disturbs().stream().anyMatch(held::contains))
+                .forEach(c -> out.add(c.code()));
+        return out;
     }
 
     private List<HypothesisView> rank(List<Fault> hypotheses, double[] prior, double[] posterior, List<EvidenceItem> items,
@@ -111,7 +127,7 @@ public class DiagnosisService {
             return null;
         }
         return new NextCheckView(c.code(), c.title(), c.minutes(), c.outcomes(), c.bypass(), c.instructions(),
-                c.cautions().stream().map(code -> catalogue.cautions().get(code)).toList(), plan.why());
+                c.cautions().stream().map(code -> catalogue.cautions().get(code)).toList(), plan.why(), c.disturbs(), c.persons());
     }
 
     private static List<String> assumptions(RuleOutcome outcome, Priors priors, SymptomRates rates) {
@@ -130,6 +146,9 @@ public class DiagnosisService {
         outcome.cautions().stream().map(Caution::code).sorted().forEach(codes::add);
         if (plan.check() != null) {
             codes.addAll(plan.check().cautions());
+            if (plan.check().persons() > 1) {
+                codes.add(LONE_WORKING);
+            }
         }
         return codes.stream().map(code -> catalogue.cautions().getOrDefault(code, code)).toList();
     }

@@ -32,6 +32,8 @@ final class EngineeringFindings {
     /** Free air assumed when judging whether air could make the actuator resonate: 1 % by volume (from memory, a badly aerated oil). */
     static final double AIR_FRACTION = 0.01;
     static final double ATMOSPHERE = BulkModulus.ATMOSPHERE;
+    /** Flow to drain at rest when the positioner's is not given: 0.5 L/min, the top of the usual 0.1-0.5 L/min of spool leakage and amplifier bleed (from memory). */
+    static final double REST_FLOW_M3_PER_S = UnitConverter.convert(0.5, "L_per_min", "m3_per_s");
 
     private final AssetSpec asset;
     private final Map<String, Reading> readings;
@@ -54,24 +56,65 @@ final class EngineeringFindings {
         return f.facts;
     }
 
-    /** Hagen-Poiseuille or Darcy-Weisbach at the measured oil temperature and full pump flow. */
+    /**
+     * The oil's viscosity at the measured temperature (ASTM D341), and the return line's pressure drop
+     * (Hagen-Poiseuille or Darcy-Weisbach) at the flow that passes when each drain reading is taken:
+     * at rest only the positioner's leakage and bleed; during a full-speed stroke the exhausting
+     * chamber's flow, the swept volume over the stroke time.
+     */
     private void drainLine() {
         Reading t = readings.get("oil_temperature");
-        Double bore = asset.value("drain_line_bore");
-        Double length = asset.value("drain_line_length");
-        Double flow = flowForReturn();
-        if (t == null || bore == null || length == null || flow == null) {
+        if (t == null) {
             return;
         }
         IsoVgGrade grade = grade();
         double nu = OilViscosity.viscosityAtCelsius(grade, t.value());
-        LineLoss.Result r = LineLoss.pressureDrop(flow, bore, length, nu, OilViscosity.densityAtCelsius(t.value()));
-        facts.add(new Calculated("drain_drop_expected", r.pressureDrop(), "Pa"));
-        facts.add(new Calculated("oil_viscosity", nu, "cSt"));
-        facts.add(new Finding("drain_drop_expected", String.format(Locale.ROOT,
-                "At %s the %s oil is about %.0f mm2/s; at full pump flow the return line would drop %s (%s, Re %.0f, %s).",
-                Facts.show(t), grade.name(), nu, Facts.pressure(r.pressureDrop()), r.method().name().toLowerCase(Locale.ROOT).replace('_', ' '),
-                r.reynolds(), r.regime().name().toLowerCase(Locale.ROOT)), UnitConverter.convert(r.pressureDrop(), "Pa", "psi"), "psi", null));
+        facts.add(new Calculated("oil_viscosity", nu, "mm2_per_s"));
+        double limit = asset.value("max_oil_viscosity") != null ? asset.value("max_oil_viscosity") : NormalBands.DEFAULT_MAX_OIL_CST;
+        facts.add(new Calculated("oil_viscosity_over_limit", nu / limit, "ratio"));
+        facts.add(new Finding("oil_viscosity", String.format(Locale.ROOT,
+                "At %s the %s oil is about %.0f mm²/s; %s", Facts.show(t), grade.name(), nu,
+                nu > limit ? String.format(Locale.ROOT, "that is thicker than the %.0f mm²/s this valve's pump and positioner accept.", limit)
+                        : nu > NormalBands.IDEAL_MAX_CST ? String.format(Locale.ROOT,
+                                "thicker than ideal (above 100 mm²/s) but within the %.0f mm²/s this valve accepts: it slows the valve a little, it is not a fault on its own.", limit)
+                        : "within the usual working range."), nu, "mm²/s", String.format(Locale.ROOT, "at most %.0f", limit)));
+        Double bore = asset.value("drain_line_bore");
+        Double length = asset.value("drain_line_length");
+        if (bore == null || length == null) {
+            return;
+        }
+        double density = OilViscosity.densityAtCelsius(t.value());
+        Double restFlow = asset.value("positioner_rest_flow");
+        if (restFlow == null) {
+            restFlow = REST_FLOW_M3_PER_S;
+            facts.add(new Assumption("No rest flow of the positioner given: 0.5 L/min assumed passing to drain at rest (spool leakage and amplifier bleed, the top of the usual range)."));
+        }
+        LineLoss.Result rest = LineLoss.pressureDrop(restFlow, bore, length, nu, density);
+        facts.add(new Calculated("drain_drop_at_rest", rest.pressureDrop(), "Pa"));
+        facts.add(drainFinding("drain_drop_at_rest", "with the valve at rest (%.1f L/min)", restFlow, rest));
+        Double strokeFlow = strokeFlow();
+        if (readings.containsKey("drain_pressure_in_stroke") && strokeFlow != null) {
+            LineLoss.Result stroke = LineLoss.pressureDrop(strokeFlow, bore, length, nu, density);
+            facts.add(new Calculated("drain_drop_in_stroke", stroke.pressureDrop(), "Pa"));
+            facts.add(drainFinding("drain_drop_in_stroke", "during a full-speed stroke (%.1f L/min)", strokeFlow, stroke));
+        }
+    }
+
+    private static Finding drainFinding(String code, String when, double flow, LineLoss.Result r) {
+        return new Finding(code, String.format(Locale.ROOT, "The return line should drop about %s " + when + " at this oil temperature.",
+                Facts.pressure(r.pressureDrop()), UnitConverter.convert(flow, "m3_per_s", "L_per_min")), UnitConverter.convert(r.pressureDrop(), "Pa", "psi"), "psi", null);
+    }
+
+    /** Flow out of the exhausting chamber in a full stroke: swept volume over the measured (or design) stroke time. */
+    private Double strokeFlow() {
+        Double bore = asset.value("piston_bore");
+        Double stroke = asset.value("stroke_length");
+        Double time = readings.containsKey("stroke_time_open") ? readings.get("stroke_time_open").value()
+                : readings.containsKey("stroke_time_close") ? readings.get("stroke_time_close").value() : asset.value("design_stroke_time");
+        if (bore == null || stroke == null || time == null) {
+            return asset.value("pump_rated_flow");
+        }
+        return ActuatorPerformance.areas(bore, 0).bore() * stroke / time;
     }
 
     /** Thrust from (supply - drain) over the piston, against what the valve needs. */
@@ -198,11 +241,6 @@ final class EngineeringFindings {
         facts.add(new Finding("stroke_demand", String.format(Locale.ROOT,
                 "A full stroke in the design %.0f s draws about %.1f L/min against the pump's rated %.1f L/min: %s.",
                 design, demand * 60_000, pump * 60_000, verdict), ratio, "ratio", null));
-    }
-
-    private Double flowForReturn() {
-        Reading measured = readings.get("pump_flow");
-        return measured != null ? Double.valueOf(measured.value()) : asset.value("pump_rated_flow");
     }
 
     private double nominalSupply() {

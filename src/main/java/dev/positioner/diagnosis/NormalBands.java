@@ -29,12 +29,19 @@ final class NormalBands {
     /** A free-draining return should read a few psi at most (from memory). */
     static final double DRAIN_HIGH_PSI = 5;
     /**
-     * Oil is too cold to work well above 100 mm2/s and too thin below 10 mm2/s: the operating range
-     * makers of servo and proportional valves commonly recommend (from memory). Mineral oil over
-     * 60 degC is hot whatever its viscosity: the widely quoted rule of thumb that oxidation life
-     * halves for every 10 degC above 60 degC (an Arrhenius rate rule; common practice, from memory).
+     * Oil is too cold when it is thicker than the pump and positioner accept: the asset's own limit
+     * ({@code max_oil_viscosity}, from their data sheets) or, without one, 200 mm2/s. That default is a
+     * rule of thumb recalled from makers' data: industrial pumps run continuously up to a few hundred
+     * mm2/s (their cold-start limits, 800-2000 mm2/s, are higher; compilations such as Herzog, Marougy
+     * and Michael, "Fluid viscosity selection criteria for hydraulic pumps and motors", 2003), while
+     * servo-class pilot stages recommend up to about 100 mm2/s and tolerate a few hundred; the more
+     * demanding part governs. Not checked here, so a site should set its own. Between {@link #IDEAL_MAX_CST} and the limit the oil
+     * is thicker than ideal (slower amplifier and pilot, more line loss) but not the cause of a fault
+     * on its own. Thinner than 10 mm2/s is too thin for pump and seals (same compilation, from memory).
+     * Mineral oil over 60 degC is hot whatever its viscosity: the widely quoted rule of thumb that
+     * oxidation life halves for every 10 degC above 60 degC (an Arrhenius rate rule; common practice).
      */
-    static final double MAX_WORKING_CST = 100, MIN_WORKING_CST = 10, OIL_HOT_DEGC = 60;
+    static final double DEFAULT_MAX_OIL_CST = 200, IDEAL_MAX_CST = 100, MIN_WORKING_CST = 10, OIL_HOT_DEGC = 60;
     /** Grade assumed when none is given: the most common grade in such systems (from memory). */
     static final IsoVgGrade DEFAULT_GRADE = IsoVgGrade.VG46;
     /**
@@ -110,7 +117,7 @@ final class NormalBands {
         return facts;
     }
 
-    /** The temperatures at which this grade leaves its working viscosity range (ASTM D341, VI 100). */
+    /** The temperatures at which this grade leaves what this valve accepts (ASTM D341, VI 100). */
     private static Band oilBand(AssetSpec asset, List<Object> facts) {
         IsoVgGrade grade;
         try {
@@ -123,20 +130,26 @@ final class NormalBands {
                     + ": assumed ISO VG46 for the working temperature band."));
             grade = DEFAULT_GRADE;
         }
-        return OIL_BANDS.get(grade);
-    }
-
-    /** The band depends on the grade only, so it is solved once per grade rather than per request. */
-    private static final java.util.Map<IsoVgGrade, Band> OIL_BANDS = new java.util.EnumMap<>(IsoVgGrade.class);
-
-    static {
-        for (IsoVgGrade grade : IsoVgGrade.values()) {
-            double cold = temperatureAt(grade, MAX_WORKING_CST);
-            double hot = Math.min(OIL_HOT_DEGC, temperatureAt(grade, MIN_WORKING_CST));
-            OIL_BANDS.put(grade, new Band("oil_temperature", cold, hot, "degC", String.format(Locale.ROOT,
-                    "%s between 100 and 10 mm2/s, ASTM D341 with VI 100", grade.name()), THERMOMETER_MARGIN_DEGC));
+        Double own = asset.value("max_oil_viscosity");
+        double limit = own != null ? own : DEFAULT_MAX_OIL_CST;
+        facts.add(new Calculated("max_oil_viscosity", limit, "mm2_per_s"));
+        if (own == null) {
+            facts.add(new Assumption(String.format(Locale.ROOT, "No oil viscosity limit in the design data: oil thicker than %.0f mm²/s "
+                    + "counts as too cold, a rule of thumb for industrial pumps to confirm against this pump's and positioner's data.",
+                    DEFAULT_MAX_OIL_CST)));
         }
+        final IsoVgGrade g = grade;
+        return OIL_BANDS.computeIfAbsent(g.name() + "@" + limit, key -> {
+            double cold = temperatureAt(g, limit);
+            double hot = Math.min(OIL_HOT_DEGC, temperatureAt(g, MIN_WORKING_CST));
+            return new Band("oil_temperature", cold, hot, "degC", String.format(Locale.ROOT,
+                    "%s between %.0f and 10 mm²/s (%s), at most 60 °C, ASTM D341 with VI 100", g.name(), limit,
+                    own != null ? "this valve's limit" : "rule of thumb"), THERMOMETER_MARGIN_DEGC);
+        });
     }
+
+    /** The band depends on the grade and the limit only, so each pair is solved once rather than per request. */
+    private static final java.util.Map<String, Band> OIL_BANDS = new java.util.concurrent.ConcurrentHashMap<>();
 
     /** Solves viscosity(t) = target by bisection; viscosity falls monotonically with temperature. */
     static double temperatureAt(IsoVgGrade grade, double targetCst) {

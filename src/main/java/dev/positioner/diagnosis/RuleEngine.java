@@ -1,6 +1,8 @@
 package dev.positioner.diagnosis;
 
+import dev.positioner.diagnosis.facts.Alert;
 import dev.positioner.diagnosis.facts.Assumption;
+import dev.positioner.diagnosis.facts.Hold;
 import dev.positioner.diagnosis.facts.Caution;
 import dev.positioner.diagnosis.facts.Evidence;
 import dev.positioner.diagnosis.facts.Explained;
@@ -47,7 +49,8 @@ public class RuleEngine {
             Collection<?> all = session.getObjects();
             return new RuleOutcome(of(all, ReportedSymptom.class), sorted(of(all, Observation.class)),
                     of(all, Finding.class), of(all, Subsumed.class), of(all, Explained.class),
-                    of(all, Evidence.class), of(all, Caution.class), of(all, Assumption.class), fired);
+                    of(all, Evidence.class), of(all, Caution.class), of(all, Assumption.class), fired,
+                    of(all, Alert.class), of(all, Hold.class));
         } finally {
             session.dispose();
         }

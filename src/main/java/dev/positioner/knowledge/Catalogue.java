@@ -12,7 +12,7 @@ import java.util.Map;
 public record Catalogue(Map<String, Fault> faults, Fault unlisted, double unlistedSymptomPresent,
         Map<String, SymptomDef> symptoms, Map<String, CheckDef> checks, Map<String, String> cautions,
         Map<String, String> sources, Map<String, QuantityDef> measurements, Map<String, QuantityDef> design,
-        Map<String, Disturbance> disturbances, RepairGuide repairGuide) {
+        Map<String, Disturbance> disturbances, RepairGuide repairGuide, Map<String, String> alerts) {
 
     /** The disturbance class of a check, or of a repair; an unknown code is the loader's to refuse. */
     public Disturbance disturbance(String code) {

@@ -57,9 +57,10 @@ final class CatalogueReader {
         Map<String, String> sources = texts(open("sources.yaml").get("sources"));
         Map<String, Disturbance> disturbances = new LinkedHashMap<>();
         open("disturbances.yaml").get("disturbances").map().forEach((code, n) -> disturbances.put(code, disturbance(code, n.withEntry(code))));
+        Map<String, String> alerts = texts(open("alerts.yaml").get("alerts"));
         YamlNode quantities = open("quantities.yaml");
         return new Catalogue(faults, unlisted, unlistedSymptom, symptoms, checks, cautions, sources,
-                quantities(quantities.get("measurements")), quantities(quantities.get("design")), disturbances, guide);
+                quantities(quantities.get("measurements")), quantities(quantities.get("design")), disturbances, guide, alerts);
     }
 
     /** Line of each entry, keyed like {@code checks.yaml/read_filter_dp/pump_worn}, for the validator. */
@@ -120,7 +121,8 @@ final class CatalogueReader {
                 n.get("bypass").isMissing() ? false : n.get("bypass").bool(), n.require("outcomes").texts(),
                 n.require("instructions").texts(), n.get("cautions").texts(),
                 distribution(n.require("otherwise")), given, n.require("source").texts(), n.require("disturbs").oneOrMoreTexts(),
-                n.get("resultAfterHours").isMissing() ? 0 : n.get("resultAfterHours").number());
+                n.get("resultAfterHours").isMissing() ? 0 : n.get("resultAfterHours").number(),
+                n.get("persons").isMissing() ? 1 : (int) n.get("persons").number());
     }
 
     private static Map<String, Double> distribution(YamlNode row) {

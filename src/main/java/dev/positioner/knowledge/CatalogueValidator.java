@@ -133,6 +133,12 @@ final class CatalogueValidator {
             add("checks.yaml", key, "bypass: " + check.bypass() + " disagrees with what it disturbs " + check.disturbs()
                     + " (a bypass or out-of-service class means bypass: true); change one of them");
         }
+        if (check.persons() < 1 || check.persons() > 4) {
+            add("checks.yaml", key, "persons must be 1 to 4");
+        }
+        if (check.persons() > 1 && !catalogue.cautions().containsKey("lone_working")) {
+            add("checks.yaml", key, "a check for more than one person needs the caution 'lone_working' in cautions.yaml");
+        }
         if (!(check.resultAfterHours() >= 0)) {
             add("checks.yaml", key, "resultAfterHours must be zero or a positive number of hours");
         }

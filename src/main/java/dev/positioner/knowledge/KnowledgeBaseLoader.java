@@ -31,7 +31,7 @@ public final class KnowledgeBaseLoader {
         } catch (IOException | RuntimeException e) {
             problems.add(new KnowledgeProblem("rules/base-vocabulary.yaml", 0, null, "cannot read: " + e.getMessage()));
         }
-        KieBase rules = new RuleCompiler(rulesDir, problems, catalogue.cautions().keySet()).compile();
+        KieBase rules = new RuleCompiler(rulesDir, problems, catalogue.cautions().keySet(), catalogue.alerts().keySet()).compile();
         if (!problems.isEmpty()) {
             throw new KnowledgeBaseException(problems);
         }

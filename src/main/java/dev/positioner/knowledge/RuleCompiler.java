@@ -26,18 +26,20 @@ import org.kie.api.definition.rule.Rule;
 final class RuleCompiler {
 
     static final Pattern RULE_ID = Pattern.compile("^([A-Z]+(?:-[A-Z0-9]+)*-\\d{2,3}) .+");
-    private static final Pattern CAUTION = Pattern.compile("new Caution\\(\"([^\"]*)\"\\)");
+    private static final Pattern CAUTION = Pattern.compile("new (Caution|Alert)\\(\"([^\"]*)\"\\)");
     private static final Pattern PACKAGE = Pattern.compile("(?m)^\\s*package\\s+([\\w.]+)\\s*;?");
 
     private final Path rulesDir;
     private final List<KnowledgeProblem> problems;
     private final java.util.Set<String> cautionCodes;
+    private final java.util.Set<String> alertCodes;
 
-    /** @param cautionCodes the caution codes of the catalogue, which rules may insert */
-    RuleCompiler(Path rulesDir, List<KnowledgeProblem> problems, java.util.Set<String> cautionCodes) {
+    /** @param cautionCodes, alertCodes the caution and alert codes of the catalogue, which rules may insert */
+    RuleCompiler(Path rulesDir, List<KnowledgeProblem> problems, java.util.Set<String> cautionCodes, java.util.Set<String> alertCodes) {
         this.rulesDir = rulesDir;
         this.problems = problems;
         this.cautionCodes = cautionCodes;
+        this.alertCodes = alertCodes;
     }
 
     KieBase compile() {
@@ -80,15 +82,16 @@ final class RuleCompiler {
         }
     }
 
-    /** A rule that inserts an unknown caution would show the technician a bare code; catch it at start-up. */
+    /** A rule that inserts an unknown caution or alert would show the technician a bare code; catch it at start-up. */
     private void checkCautions(String relative, String text) {
         String[] lines = text.split("\n", -1);
         for (int i = 0; i < lines.length; i++) {
             Matcher m = CAUTION.matcher(lines[i]);
             while (m.find()) {
-                if (!cautionCodes.contains(m.group(1))) {
-                    problems.add(new KnowledgeProblem("rules/" + relative, i + 1, null,
-                            "caution '" + m.group(1) + "' is not in rules/catalogue/cautions.yaml"));
+                boolean caution = m.group(1).equals("Caution");
+                if (!(caution ? cautionCodes : alertCodes).contains(m.group(2))) {
+                    problems.add(new KnowledgeProblem("rules/" + relative, i + 1, null, (caution ? "caution '" : "alert '")
+                            + m.group(2) + "' is not in rules/catalogue/" + (caution ? "cautions.yaml" : "alerts.yaml")));
                 }
             }
         }

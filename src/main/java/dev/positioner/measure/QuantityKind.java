@@ -3,7 +3,7 @@ package dev.positioner.measure;
 /**
  * The physical kind of a quantity and the canonical unit the service stores it in.
  * Canonical units are SI except where technicians' own scale is the natural one (percent of
- * travel, particles per mL, ppm), because the limits the rules compare against are written so.
+ * travel, particles per mL, ppm, kinematic viscosity in mm2/s as oil data sheets give it), because the limits the rules compare against are written so.
  */
 public enum QuantityKind {
     PRESSURE("Pa"),
@@ -18,6 +18,7 @@ public enum QuantityKind {
     LENGTH("m"),
     MASS("kg"),
     FORCE("N"),
+    VISCOSITY("mm2_per_s"),
     ISO_VG("grade"),
     ISO4406("code");
 

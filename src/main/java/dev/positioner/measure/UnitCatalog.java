@@ -47,7 +47,10 @@ final class UnitCatalog {
             Map.entry("m3_per_h", Units.CUBIC_METRE.divide(Units.HOUR)),
             Map.entry("m_per_s", Units.METRE.divide(Units.SECOND)),
             Map.entry("mm_per_min", MILLI(Units.METRE).divide(Units.MINUTE)),
-            Map.entry("in_per_min", USCustomary.INCH.divide(Units.MINUTE)));
+            Map.entry("in_per_min", USCustomary.INCH.divide(Units.MINUTE)),
+            // Kinematic viscosity: the centistoke is defined as 1 mm2/s.
+            Map.entry("mm2_per_s", MILLI(Units.METRE).pow(2).divide(Units.SECOND)),
+            Map.entry("cSt", MILLI(Units.METRE).pow(2).divide(Units.SECOND)));
 
     private UnitCatalog() {
     }

@@ -1,6 +1,7 @@
 package dev.positioner.diagnosis;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import dev.positioner.diagnosis.DiagnosisRequest.AssetInput;
@@ -38,18 +39,46 @@ class DecisiveReadingsTest {
         DiagnosisResponse r = diagnose(List.of("slow_stroke", "drain_backpressure"),
                 m("oil_temperature", 50, "degF"), m("drain_pressure", 8, "bar"));
         assertTrue(r.decision().rulesFired().contains("CTX-DRN-03"), r.decision().rulesFired().toString());
-        String leader = r.hypotheses().get(0).fault();
-        assertTrue(leader.equals("drain_line_restricted") || leader.equals("reservoir_vent_blocked"), leader);
+        assertRestrictionStaysInTheRunning(r);
         assertTrue(r.findings().stream().anyMatch(f -> f.code().equals("drain_pressure_unexplained")));
     }
 
     @Test
-    void drainPressureThatColdOilDoesExplainPointsToTheOil() {
-        // The same cold oil with 20 psi at the drain: within the ~3 bar (45 psi) thick oil alone would give.
+    void drainPressureAtRestIsJudgedAtTheFlowThatPassesAtRest() {
+        // PV-2041, VG46 at 10 degC: about 260 mm2/s. At rest only about 0.5 L/min passes to drain;
+        // Hagen-Poiseuille in 6 m of 12.7 mm line: dp = 128 mu L Q / (pi d^4)
+        // = 128 x 0.226 Pa s x 6 m x 8.3e-6 m3/s / (pi x 2.60e-8 m4) = about 17 kPa (2.5 psi).
+        // 20 psi at rest is eight times that: a restriction, not the oil (field review R22).
         DiagnosisResponse r = diagnose(List.of("slow_stroke", "drain_backpressure"),
                 m("oil_temperature", 10, "degC"), m("drain_pressure", 20, "psi"));
-        assertTrue(r.decision().rulesFired().contains("CTX-DRN-01"), r.decision().rulesFired().toString());
-        assertEquals("oil_too_cold", r.hypotheses().get(0).fault());
+        assertTrue(r.decision().rulesFired().contains("CTX-DRN-03"), r.decision().rulesFired().toString());
+        assertFalse(r.decision().rulesFired().contains("CTX-DRN-01"), r.decision().rulesFired().toString());
+        assertTrue(r.findings().stream().anyMatch(f -> f.code().equals("drain_drop_at_rest")
+                && Math.abs(f.value() - 2.5) < 0.5), r.findings().toString());
+        assertRestrictionStaysInTheRunning(r);
+    }
+
+    /**
+     * The oil here is also colder than the valve accepts (about 260 mm2/s against 200), which is a
+     * cause in its own right, so it may lead; what matters is that the restriction is not explained
+     * away by it: a return-side cause stays among the first two.
+     */
+    static void assertRestrictionStaysInTheRunning(DiagnosisResponse r) {
+        var firstTwo = r.hypotheses().subList(0, 2).stream().map(h -> h.fault()).toList();
+        assertTrue(firstTwo.contains("drain_line_restricted") || firstTwo.contains("reservoir_vent_blocked"), firstTwo.toString());
+    }
+
+    @Test
+    void drainPressureInAStrokeThatColdOilDoesExplainPointsAwayFromARestriction() {
+        // The same oil during a full-speed stroke: the swept volume over the design 40 s is
+        // 0.0324 m2 x 0.1016 m / 40 s = 8.2e-5 m3/s (4.9 L/min), and the line drops
+        // 128 x 0.226 x 6 x 8.2e-5 / (pi x 2.60e-8) = about 170 kPa (25 psi). 20 psi is within it.
+        DiagnosisResponse r = diagnose(List.of("slow_stroke"), m("oil_temperature", 10, "degC"),
+                m("drain_pressure_in_stroke", 20, "psi"));
+        assertTrue(r.decision().rulesFired().contains("CTX-DRN-05"), r.decision().rulesFired().toString());
+        assertFalse(r.decision().rulesFired().contains("CTX-DRN-04"));
+        assertTrue(r.findings().stream().anyMatch(f -> f.code().equals("drain_drop_in_stroke")
+                && Math.abs(f.value() - 25) < 4), r.findings().toString());
     }
 
     @Test

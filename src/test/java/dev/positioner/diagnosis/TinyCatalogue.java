@@ -26,7 +26,7 @@ final class TinyCatalogue {
         return new CheckDef(code, code, minutes, bypass, List.of("a", "b"), List.of("do it"), List.of(),
                 Map.of("a", 0.5, "b", 0.5),
                 Map.of("f0", Map.of("a", aGivenF0, "b", 1 - aGivenF0), "f1", Map.of("a", aGivenF1, "b", 1 - aGivenF1)),
-                List.of("from_memory"), List.of(bypass ? "positioner_out_of_loop" : "nothing"), 0);
+                List.of("from_memory"), List.of(bypass ? "positioner_out_of_loop" : "nothing"), 0, 1);
     }
 
     static Catalogue of(CheckDef... checks) {
@@ -45,6 +45,6 @@ final class TinyCatalogue {
                 "nothing", new Disturbance("nothing", "nothing", 0, false, List.of(), List.of("common_practice")),
                 "positioner_out_of_loop", new Disturbance("positioner_out_of_loop", "Bypassed", penalty, true, List.of(), List.of("common_practice")));
         return new Catalogue(faults, fault("not_in_catalogue", 0.01, 240), 0.15, Map.of(), byCode, Map.of(),
-                Map.of(), Map.of(), Map.of(), disturbances, RepairGuide.empty());
+                Map.of(), Map.of(), Map.of(), disturbances, RepairGuide.empty(), Map.of());
     }
 }
