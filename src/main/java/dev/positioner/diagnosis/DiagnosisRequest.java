@@ -7,9 +7,17 @@ import java.util.List;
  * {@code absentSymptoms} are those the client has looked for and not found. A symptom in neither
  * list is unknown and does not count either way. {@code traces} are ids of uploaded traces whose
  * metrics count as measurements (a measurement sent by hand wins over the same one from a trace).
+ * {@code repairs} are the repairs tried so far; {@code findCauseFirst} asks for no repair until one
+ * cause reaches the stopping threshold (the site's setting when absent).
  */
 public record DiagnosisRequest(List<String> symptoms, List<String> absentSymptoms, List<MeasurementInput> measurements,
-        List<CheckInput> checks, List<String> unavailableChecks, AssetInput asset, List<String> traces) {
+        List<CheckInput> checks, List<String> unavailableChecks, AssetInput asset, List<String> traces,
+        List<RepairInput> repairs, Boolean findCauseFirst) {
+
+    public DiagnosisRequest(List<String> symptoms, List<String> absentSymptoms, List<MeasurementInput> measurements,
+            List<CheckInput> checks, List<String> unavailableChecks, AssetInput asset, List<String> traces) {
+        this(symptoms, absentSymptoms, measurements, checks, unavailableChecks, asset, traces, null, null);
+    }
 
     public DiagnosisRequest(List<String> symptoms, List<String> absentSymptoms, List<MeasurementInput> measurements,
             List<CheckInput> checks, List<String> unavailableChecks, AssetInput asset) {
@@ -20,6 +28,10 @@ public record DiagnosisRequest(List<String> symptoms, List<String> absentSymptom
     }
 
     public record CheckInput(String check, String outcome) {
+    }
+
+    /** A repair tried, in order: the fault it was for, and whether the valve then worked (fixed / not_fixed). */
+    public record RepairInput(String fault, String outcome) {
     }
 
     /**

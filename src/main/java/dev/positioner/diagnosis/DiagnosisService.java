@@ -38,6 +38,8 @@ public class DiagnosisService {
     static final String LONE_WORKING = "lone_working";
 
     static final String METHOD = "Expected cost of repair with one-step look-ahead (Heckerman, Breese and Rommelse, CACM 1995)";
+    static final String STEP_METHOD = "Expected cost to a working valve over checks and repairs, two steps ahead "
+            + "(Breese and Heckerman, UAI 1996)";
 
     private final Catalogue catalogue;
     private final RuleEngine engine;
@@ -45,12 +47,18 @@ public class DiagnosisService {
     private final PriorSource priorSource;
     private final SymptomRateSource rateSource;
     private final CheckPlanner planner;
+    private final StepPlanner stepPlanner;
     private final double stopThreshold;
+    private final boolean findCauseFirst;
 
     public DiagnosisService(KnowledgeBase knowledge, RuleEngine engine, AssetDirectory assets, PriorSource priorSource,
             SymptomRateSource rateSource,
             @ConfigProperty(name = "positioner.stop-threshold") double stopThreshold,
-            @ConfigProperty(name = "positioner.minimum-outcome-chance") double minimumChance) {
+            @ConfigProperty(name = "positioner.minimum-outcome-chance") double minimumChance,
+            @ConfigProperty(name = "positioner.repair.money-per-hour") double moneyPerHour,
+            @ConfigProperty(name = "positioner.repair.irreversible-min-probability") double irreversibleMinimum,
+            @ConfigProperty(name = "positioner.repair.look-ahead-breadth") int breadth,
+            @ConfigProperty(name = "positioner.repair.find-cause-first") boolean findCauseFirst) {
         this.catalogue = knowledge.catalogue();
         this.engine = engine;
         this.assets = assets;
@@ -58,6 +66,8 @@ public class DiagnosisService {
         this.rateSource = rateSource;
         this.stopThreshold = stopThreshold;
         this.planner = new CheckPlanner(catalogue, stopThreshold, minimumChance);
+        this.stepPlanner = new StepPlanner(catalogue, stopThreshold, moneyPerHour, irreversibleMinimum, breadth);
+        this.findCauseFirst = findCauseFirst;
     }
 
     /** Optional: without a trace store (a service built outside the container) traces cannot be referenced. */
@@ -79,22 +89,38 @@ public class DiagnosisService {
         RuleOutcome outcome = engine.evaluate(facts);
 
         SymptomRates rates = rateSource.rates(catalogue, input.asset());
-        List<EvidenceItem> items = EvidenceItems.from(catalogue, rates, outcome, readings);
+        List<EvidenceItem> items = EvidenceItems.from(catalogue, rates, outcome, readings, input.repairs());
         List<Fault> hypotheses = catalogue.hypotheses();
         Priors priors = priorSource.priors(catalogue, input.asset());
         double[] prior = priors.values();
         double[] posterior = Bayes.posterior(prior, items.stream().map(EvidenceItem::likelihood).toList());
 
         Set<String> done = outcome.observations().stream().map(Observation::check).collect(Collectors.toSet());
-        CheckPlan plan = planner.plan(posterior, done, unavailable(input.unavailableChecks(), outcome));
+        Set<String> unavailable = unavailable(input.unavailableChecks(), outcome);
+        boolean causeFirst = input.findCauseFirst() != null ? input.findCauseFirst() : findCauseFirst;
+        var fixed = input.repairs().stream().filter(DiagnosisInput.RepairTried::fixed).findFirst();
+        CheckPlan plan;
+        StepPlan step;
+        if (fixed.isPresent()) {
+            String reason = "The valve works again after the repair for " + catalogue.hypothesis(fixed.get().fault()).title()
+                    + ": finish the return to service and close the job.";
+            plan = new CheckPlan(null, null, reason, 0, Double.NaN);
+            step = StepPlan.stop(reason, 0);
+        } else {
+            plan = planner.plan(posterior, done, unavailable);
+            step = stepPlanner.plan(posterior, done, unavailable,
+                    input.repairs().stream().map(DiagnosisInput.RepairTried::fault).collect(Collectors.toSet()), causeFirst);
+        }
         return new DiagnosisResponse(rank(hypotheses, prior, posterior, items, priors.notes()), nextCheck(plan),
                 outcome.findings().stream().map(f -> new FindingView(f.code(), f.text(),
                         Double.isNaN(f.value()) ? null : f.value(), f.unit(), f.limit())).toList(),
                 cautions(outcome, plan), assumptions(outcome, priors, rates),
                 new DecisionView(METHOD, stopThreshold, plan.expectedCostNow(),
                         Double.isNaN(plan.expectedCostWithCheck()) ? null : plan.expectedCostWithCheck(),
-                        plan.stopReason(), List.copyOf(outcome.firedRules())),
-                outcome.alerts().stream().map(a -> catalogue.alerts().get(a.code())).distinct().toList());
+                        plan.stopReason(), List.copyOf(outcome.firedRules()), STEP_METHOD, step.expectedCostNow(),
+                        Double.isNaN(step.expectedCostWithStep()) ? null : step.expectedCostWithStep(), step.stopReason(), causeFirst),
+                outcome.alerts().stream().map(a -> catalogue.alerts().get(a.code())).distinct().toList(),
+                StepViews.of(catalogue, step));
     }
 
     /** What the technician cannot do, and what the situation holds back (a rule's Hold on a class of disturbance). */

@@ -24,6 +24,29 @@ final class EvidenceItems {
     private EvidenceItems() {
     }
 
+    /**
+     * P(the valve works after repairing h | the cause is another one): a wrong repair rarely cures the
+     * valve, by coincidence or because the work disturbed what was wrong (from memory).
+     */
+    static final double WRONG_REPAIR_FIXES = 0.02;
+
+    static List<EvidenceItem> from(Catalogue catalogue, SymptomRates rates, RuleOutcome outcome, Map<String, Reading> readings,
+            List<DiagnosisInput.RepairTried> repairs) {
+        List<EvidenceItem> items = from(catalogue, rates, outcome, readings);
+        List<Fault> hypotheses = catalogue.hypotheses();
+        for (DiagnosisInput.RepairTried r : repairs) {
+            int h = indexOf(hypotheses, r.fault());
+            double fix = hypotheses.get(h).repair().fixChance();
+            double[] l = new double[hypotheses.size()];
+            Arrays.fill(l, r.fixed() ? WRONG_REPAIR_FIXES : 1.0);
+            l[h] = r.fixed() ? fix : Math.max(1 - fix, 0.01);
+            String title = hypotheses.get(h).title();
+            items.add(new EvidenceItem(r.fixed() ? "The valve worked again after the repair for: " + title
+                    : "The repair for this did not get the valve working: " + title, l));
+        }
+        return items;
+    }
+
     static List<EvidenceItem> from(Catalogue catalogue, SymptomRates rates, RuleOutcome outcome, Map<String, Reading> readings) {
         List<Fault> hypotheses = catalogue.hypotheses();
         List<EvidenceItem> items = new ArrayList<>();

@@ -74,11 +74,12 @@ final class RequestReader {
             }
             unavailable.add(code);
         });
+        List<DiagnosisInput.RepairTried> repairs = repairs(request.repairs());
         if (!errors.isEmpty()) {
             throw new InvalidRequestException(errors);
         }
         List<Assumption> all = new ArrayList<>(assumptions);
-        return new DiagnosisInput(symptoms, readings, checks, unavailable, asset, all, traceFacts);
+        return new DiagnosisInput(symptoms, readings, checks, unavailable, asset, all, traceFacts, repairs, request.findCauseFirst());
     }
 
     /** Trace metrics as readings in percent or seconds, unless the same quantity was measured by hand. */
@@ -168,6 +169,29 @@ final class RequestReader {
             }
         }
         return new ArrayList<>(out.values());
+    }
+
+    static final List<String> REPAIR_OUTCOMES = List.of("fixed", "not_fixed");
+
+    private List<DiagnosisInput.RepairTried> repairs(List<DiagnosisRequest.RepairInput> inputs) {
+        List<DiagnosisInput.RepairTried> out = new ArrayList<>();
+        Set<String> seen = new java.util.HashSet<>();
+        for (int i = 0; inputs != null && i < inputs.size(); i++) {
+            String field = "repairs[" + i + "]";
+            DiagnosisRequest.RepairInput r = inputs.get(i);
+            if (r == null || r.fault() == null || catalogue.hypothesis(r.fault()) == null) {
+                errors.add(new FieldError(field + ".fault", r == null || r.fault() == null ? "is required"
+                        : "unknown fault '" + r.fault() + "'"));
+            } else if (r.outcome() == null || !REPAIR_OUTCOMES.contains(r.outcome())) {
+                errors.add(new FieldError(field + ".outcome", "must be one of " + REPAIR_OUTCOMES
+                        + (r.outcome() == null ? "" : ", not '" + r.outcome() + "'")));
+            } else if (!seen.add(r.fault())) {
+                errors.add(new FieldError(field + ".fault", "the repair for '" + r.fault() + "' is given twice"));
+            } else {
+                out.add(new DiagnosisInput.RepairTried(r.fault(), r.outcome().equals("fixed")));
+            }
+        }
+        return out;
     }
 
     private AssetSpec asset(AssetInput input) {

@@ -14,6 +14,6 @@ final class Standalone {
     }
 
     static DiagnosisService service() {
-        return new DiagnosisService(KB, new RuleEngine(KB), new DemoPlant(true), new CataloguePriors(), new CatalogueSymptomRates(), 0.9, 0.05);
+        return new DiagnosisService(KB, new RuleEngine(KB), new DemoPlant(true), new CataloguePriors(), new CatalogueSymptomRates(), 0.9, 0.05, 120, 0.5, 6, false);
     }
 }

@@ -69,9 +69,11 @@ final class Evaluation {
                 args[i] = new CataloguePriors();
             } else if (type == SymptomRateSource.class) {
                 args[i] = rates;
-            } else if (property != null && (type == double.class || type == Double.class)) {
+            } else if (property != null && (type == double.class || type == int.class || type == boolean.class)) {
                 String fallback = ConfigProperty.UNCONFIGURED_VALUE.equals(property.defaultValue()) ? null : property.defaultValue();
-                args[i] = Double.parseDouble(setting(config, property.name(), fallback));
+                String text = setting(config, property.name(), fallback);
+                args[i] = type == double.class ? Double.parseDouble(text) : type == int.class ? (Object) Integer.parseInt(text)
+                        : (Object) Boolean.parseBoolean(text);
                 used.append(used.isEmpty() ? "" : ", ").append(property.name()).append(" = ").append(args[i]);
             } else {
                 throw new IllegalStateException("the evaluation does not know how to supply " + parameters[i]

@@ -40,6 +40,7 @@ class EvaluationTest {
     static EvaluationReport heldOut5;
     static EvaluationReport report;
     static List<LearntFromOtherSets.Row> learnt;
+    static List<WorkingValveReport> working;
 
     @BeforeAll
     static void replayAllCases() throws IOException {
@@ -62,7 +63,12 @@ class EvaluationTest {
         learnt = LearntFromOtherSets.run(evaluation, sets);
         md.append(LearntFromOtherSets.markdown(learnt, LearntFromOtherSets.inSample(evaluation, sets),
                 Evaluation.setting("positioner.learning.symptom-weight")));
+        WorkingValveReplay toWorking = new WorkingValveReplay(evaluation.service, evaluation.kb.catalogue(), evaluation.stopThreshold);
+        working = sets.stream().map(set -> WorkingValveReport.replay(set.title(), set != development,
+                set.results().stream().map(CaseResult::c).toList(), toWorking)).toList();
+        md.append(WorkingValveReport.markdown(working));
         md.append(sets.stream().map(EvaluationReport::markdown).collect(Collectors.joining("\n")));
+        md.append(working.stream().map(WorkingValveReport::cases).collect(Collectors.joining("\n")));
         Path out = Path.of("target", "evaluation-report.md");
         Files.createDirectories(out.getParent());
         Files.writeString(out, md);
