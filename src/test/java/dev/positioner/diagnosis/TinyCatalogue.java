@@ -34,9 +34,20 @@ final class TinyCatalogue {
     }
 
     static Catalogue withBypassPenalty(double penalty, CheckDef... checks) {
+        return with(penalty, fault("f0", 0.594, 100), fault("f1", 0.396, 80), checks);
+    }
+
+    /** A fault whose repair takes these minutes, fixes it with this chance and may or may not be undone. */
+    static Fault fault(String code, double prior, double repair, double fixChance, boolean reversible) {
+        return new Fault(code, code, "test", prior, "OTH", "6.4 Unknown", "", List.of("from_memory"),
+                new Repair(code, "repair " + code, repair, 0, reversible, fixChance, List.of("nothing"), List.of(), List.of(),
+                        List.of(), List.of(), List.of(), List.of(), List.of(), List.of("from_memory")));
+    }
+
+    static Catalogue with(double penalty, Fault f0, Fault f1, CheckDef... checks) {
         Map<String, Fault> faults = new LinkedHashMap<>();
-        faults.put("f0", fault("f0", 0.594, 100));
-        faults.put("f1", fault("f1", 0.396, 80));
+        faults.put("f0", f0);
+        faults.put("f1", f1);
         Map<String, CheckDef> byCode = new LinkedHashMap<>();
         for (CheckDef c : checks) {
             byCode.put(c.code(), c);

@@ -67,6 +67,7 @@ class EvaluationTest {
         working = sets.stream().map(set -> WorkingValveReport.replay(set.title(), set != development,
                 set.results().stream().map(CaseResult::c).toList(), toWorking)).toList();
         md.append(WorkingValveReport.markdown(working));
+        md.append(Calibration.markdown(sets.stream().skip(1).flatMap(set -> set.results().stream()).toList()));
         md.append(sets.stream().map(EvaluationReport::markdown).collect(Collectors.joining("\n")));
         md.append(working.stream().map(WorkingValveReport::cases).collect(Collectors.joining("\n")));
         Path out = Path.of("target", "evaluation-report.md");
